@@ -1,0 +1,5 @@
+// Public surface of the pure computation core: arrays in, numbers out, no I/O.
+export { AnalysisError } from "./errors";
+export * from "./wall-laws";
+export * from "./decay-models";
+export * from "./skin-friction";

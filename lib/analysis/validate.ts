@@ -1,0 +1,56 @@
+import { AnalysisError } from "./errors";
+
+// Shared input guards. They loop with plain indexes so validating 10^6 samples
+// costs one pass and no allocation.
+
+export function assertFiniteNumber(value: number, subject: string): void {
+  if (typeof value !== "number" || !Number.isFinite(value)) {
+    throw new AnalysisError(subject, `must be a finite number, got ${String(value)}`);
+  }
+}
+
+export function assertPositiveNumber(value: number, subject: string): void {
+  assertFiniteNumber(value, subject);
+  if (value <= 0) throw new AnalysisError(subject, `must be > 0, got ${value}`);
+}
+
+export function assertFiniteArray(values: ArrayLike<number>, subject: string): void {
+  if (values == null || typeof values.length !== "number") {
+    throw new AnalysisError(subject, "must be an array of numbers");
+  }
+  for (let i = 0; i < values.length; i++) {
+    const v = values[i];
+    if (typeof v !== "number" || !Number.isFinite(v)) {
+      throw new AnalysisError(subject, `element ${i} is not a finite number (${String(v)})`);
+    }
+  }
+}
+
+/** Checks both arrays are finite and of equal, non-zero length. */
+export function assertPairedSeries(
+  x: ArrayLike<number>,
+  y: ArrayLike<number>,
+  xSubject: string,
+  ySubject: string,
+): void {
+  assertFiniteArray(x, xSubject);
+  assertFiniteArray(y, ySubject);
+  if (x.length !== y.length) {
+    throw new AnalysisError(
+      ySubject,
+      `length ${y.length} differs from ${xSubject} length ${x.length}`,
+    );
+  }
+  if (x.length === 0) throw new AnalysisError(xSubject, "is empty");
+}
+
+export function assertStrictlyIncreasing(x: ArrayLike<number>, subject: string): void {
+  for (let i = 1; i < x.length; i++) {
+    if (!(x[i] > x[i - 1])) {
+      throw new AnalysisError(
+        subject,
+        `must be strictly increasing; element ${i} (${x[i]}) <= element ${i - 1} (${x[i - 1]})`,
+      );
+    }
+  }
+}
