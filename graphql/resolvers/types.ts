@@ -1,0 +1,102 @@
+import type { BuildRow } from "@/db/queries/builds";
+import type { GateDecisionRow } from "@/db/queries/gate";
+import type { QuantityValueRow, TrendPointRow } from "@/db/queries/quantity-values";
+import type { RunRow } from "@/db/queries/runs";
+import { deviationFromReference, type Verdict } from "@/lib/analysis";
+import type { BandInForce } from "@/lib/evaluation/types";
+import type { GraphQLContext } from "../context";
+
+type Ctx = GraphQLContext;
+
+function countVerdicts(verdicts: Verdict[]) {
+  const counts = { within: 0, marginal: 0, outside: 0, unbanded: 0, missing: 0 };
+  for (const v of verdicts) counts[v] += 1;
+  return counts;
+}
+
+export const Build = {
+  pipelineUrl: (b: BuildRow) => b.pipeline_url,
+  receivedAt: (b: BuildRow) => b.received_at,
+  runCounts: async (b: BuildRow, _: unknown, ctx: Ctx) => countVerdicts((await ctx.loaders.runsByBuild.load(b.id)).map((r) => r.verdict)),
+  runs: (b: BuildRow, _: unknown, ctx: Ctx) => ctx.loaders.runsByBuild.load(b.id),
+  decision: async (b: BuildRow, _: unknown, ctx: Ctx) => (await ctx.loaders.decisionByBuild.load(b.id))[0] ?? null,
+  gate: async (b: BuildRow, _: unknown, ctx: Ctx) => (await ctx.loaders.decisionByBuild.load(b.id))[0]?.state ?? "pending",
+};
+
+export const GateDecision = {
+  decidedBy: (d: GateDecisionRow) => d.decided_by_name,
+  decidedByEmail: (d: GateDecisionRow) => d.decided_by_email,
+  decidedAt: (d: GateDecisionRow) => d.decided_at,
+};
+
+export const Run = {
+  buildId: (r: RunRow) => r.build_id,
+  case: (r: RunRow) => r.case_key,
+  model: (r: RunRow) => r.model_key,
+  wallSeconds: (r: RunRow) => r.wall_seconds,
+  quantities: (r: RunRow, _: unknown, ctx: Ctx) => ctx.loaders.quantityValuesByRun.load(r.id),
+  series: (r: RunRow, _: unknown, ctx: Ctx) => ctx.loaders.seriesByRun.load(r.id),
+  stresses: (r: RunRow, _: unknown, ctx: Ctx) => ctx.loaders.stressesByRun.load(r.id),
+  gridStudy: async (r: RunRow, _: unknown, ctx: Ctx) => (await ctx.loaders.gridStudyByRun.load(r.id))[0] ?? null,
+  coefficients: (r: RunRow, _: unknown, ctx: Ctx) => ctx.loaders.coefficientsByRun.load(r.id),
+};
+
+const bandOf = (q: QuantityValueRow, ctx: Ctx) => (q.band_id === null ? Promise.resolve(null) : ctx.loaders.band.load(q.band_id));
+const definitionOf = async (q: QuantityValueRow, ctx: Ctx) => (await ctx.loaders.quantityDefinitions.load("all")).find((d) => d.key === q.quantity_key);
+
+export const QuantityValue = {
+  key: (q: QuantityValueRow) => q.quantity_key,
+  label: async (q: QuantityValueRow, _: unknown, ctx: Ctx) => (await definitionOf(q, ctx))?.label ?? null,
+  unit: async (q: QuantityValueRow, _: unknown, ctx: Ctx) => (await definitionOf(q, ctx))?.unit ?? null,
+  band: bandOf,
+  reference: async (q: QuantityValueRow, _: unknown, ctx: Ctx) => (await bandOf(q, ctx))?.reference ?? null,
+  source: async (q: QuantityValueRow, _: unknown, ctx: Ctx) => (await bandOf(q, ctx))?.source ?? null,
+  lower: async (q: QuantityValueRow, _: unknown, ctx: Ctx) => (await bandOf(q, ctx))?.lower ?? null,
+  upper: async (q: QuantityValueRow, _: unknown, ctx: Ctx) => (await bandOf(q, ctx))?.upper ?? null,
+  marginalMargin: async (q: QuantityValueRow, _: unknown, ctx: Ctx) => (await bandOf(q, ctx))?.marginalMargin ?? null,
+  deviation: async (q: QuantityValueRow, _: unknown, ctx: Ctx) => deviation(q, await bandOf(q, ctx))?.absolute ?? null,
+  deviationPct: async (q: QuantityValueRow, _: unknown, ctx: Ctx) => deviation(q, await bandOf(q, ctx))?.relativePct ?? null,
+  baselineValue: (q: QuantityValueRow) => q.baseline_value,
+  baselineDelta: (q: QuantityValueRow) => q.baseline_delta,
+  baselineBuildId: (q: QuantityValueRow) => q.baseline_build_id,
+  driftReason: (q: QuantityValueRow) => q.drift_reason,
+  driftPValue: (q: QuantityValueRow) => q.drift_p_value,
+  driftSlope: (q: QuantityValueRow) => q.drift_slope,
+};
+
+function deviation(q: QuantityValueRow, band: BandInForce | null) {
+  if (q.value === null || !band || band.reference === null) return null;
+  return deviationFromReference(q.value, band.reference);
+}
+
+export const Band = {
+  case: (b: BandInForce) => b.caseKey,
+  quantity: (b: BandInForce) => b.quantityKey,
+  model: (b: BandInForce) => b.modelKey,
+};
+
+export const Case = {
+  models: (c: { modelKeys: string[] }) => c.modelKeys,
+};
+
+export const StressSample = {
+  lumleyF: (s: { lumley_f: number | null }) => s.lumley_f,
+  barycentricX: (s: { bary_x: number | null }) => s.bary_x,
+  barycentricY: (s: { bary_y: number | null }) => s.bary_y,
+};
+
+export const GridStudy = {
+  observedOrder: (g: { observed_order: number | null }) => g.observed_order,
+  extrapolatedValue: (g: { extrapolated_value: number | null }) => g.extrapolated_value,
+  gciFinePct: (g: { gci_fine_pct: number | null }) => g.gci_fine_pct,
+  eaPct: (g: { ea_pct: number | null }) => g.ea_pct,
+  eextPct: (g: { eext_pct: number | null }) => g.eext_pct,
+};
+
+export const TrendPoint = {
+  buildId: (p: TrendPointRow) => p.build_id,
+  receivedAt: (p: TrendPointRow) => p.build_received_at,
+  driftReason: (p: TrendPointRow) => p.drift_reason,
+  bandVersion: (p: TrendPointRow) => p.band_version,
+  marginalMargin: (p: TrendPointRow) => p.marginal_margin,
+};

@@ -1,0 +1,78 @@
+// The public CI contract (DESIGN.md). Arrays of numbers are plain [Float!]! so
+// that any CI system can post JSON with curl.
+export const submissionTypeDefs = /* GraphQL */ `
+  input BuildInput {
+    solver: String!
+    version: String!
+    commit: String!
+    branch: String!
+    pipelineUrl: String
+  }
+
+  input QuantityInput {
+    key: String!
+    value: Float!
+  }
+
+  input SeriesInput {
+    key: String!
+    x: [Float!]!
+    y: [Float!]!
+  }
+
+  input StressSampleInput {
+    at: Float!
+    uu: Float!
+    vv: Float!
+    ww: Float!
+    uv: Float!
+    uw: Float!
+    vw: Float!
+  }
+
+  input GridStudyInput {
+    quantity: String!
+    "Cell counts, fine to coarse."
+    cells: [Float!]!
+    "The studied quantity on each grid, fine to coarse."
+    values: [Float!]!
+    dimension: Int!
+  }
+
+  input CoefficientInput {
+    name: String!
+    value: Float!
+  }
+
+  input RunInput {
+    case: String!
+    model: String!
+    "Defaults to \\"default\\"."
+    grid: String
+    status: RunStatus!
+    iterations: Int
+    wallSeconds: Float
+    quantities: [QuantityInput!]
+    series: [SeriesInput!]
+    stresses: [StressSampleInput!]
+    gridStudy: GridStudyInput
+    coefficients: [CoefficientInput!]
+  }
+
+  input ResultSubmission {
+    build: BuildInput!
+    runs: [RunInput!]!
+  }
+
+  type SubmissionReceipt {
+    build: Build!
+    "The runs this submission stored (replacing earlier posts of the same case, model and grid)."
+    runs: [Run!]!
+    "True when this post created the build, false when it updated an existing one."
+    created: Boolean!
+  }
+
+  extend type Mutation {
+    submitResults(input: ResultSubmission!): SubmissionReceipt!
+  }
+`;

@@ -1,0 +1,62 @@
+import "server-only";
+import bcrypt from "bcryptjs";
+import type { NextAuthOptions } from "next-auth";
+import CredentialsProvider from "next-auth/providers/credentials";
+import { z } from "zod";
+import { getDb } from "@/db";
+import { getUserByEmail } from "@/db/queries/identities";
+import { getEnv } from "@/lib/env";
+
+const credentialsSchema = z.object({
+  email: z.email().max(320),
+  password: z.string().min(1).max(200),
+});
+
+let dummyHash: string | undefined;
+function getDummyHash(): string {
+  dummyHash ??= bcrypt.hashSync("not-a-password", 11);
+  return dummyHash;
+}
+
+// E-mail + password against bcrypt hashes in `users`; the role travels in the JWT
+// and the session so that server code can check it without another query.
+export const authOptions: NextAuthOptions = {
+  secret: getEnv().NEXTAUTH_SECRET,
+  session: { strategy: "jwt", maxAge: 12 * 60 * 60 },
+  pages: { signIn: "/sign-in" },
+  providers: [
+    CredentialsProvider({
+      name: "Tauline account",
+      credentials: {
+        email: { label: "E-mail", type: "email" },
+        password: { label: "Password", type: "password" },
+      },
+      async authorize(unsafeInput) {
+        const parsed = credentialsSchema.safeParse(unsafeInput);
+        if (!parsed.success) return null;
+        const user = await getUserByEmail({ db: getDb(), email: parsed.data.email });
+        // Compare even when the user is unknown so the timing does not reveal which e-mails exist.
+        const hash = user?.password_hash ?? getDummyHash();
+        const ok = await bcrypt.compare(parsed.data.password, hash);
+        if (!user || !ok || !user.active) return null;
+        return { id: String(user.id), email: user.email, name: user.name, role: user.role };
+      },
+    }),
+  ],
+  callbacks: {
+    async jwt({ token, user }) {
+      if (user) {
+        token.userId = Number(user.id);
+        token.role = user.role;
+      }
+      return token;
+    },
+    async session({ session, token }) {
+      if (session.user) {
+        session.user.id = token.userId;
+        session.user.role = token.role;
+      }
+      return session;
+    },
+  },
+};

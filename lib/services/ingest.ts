@@ -1,0 +1,179 @@
+import "server-only";
+import { getDb } from "@/db";
+import { insertAuditEntry } from "@/db/queries/audit";
+import { getBaselineBuild, setBuildVerdict, upsertBuildForUpdate } from "@/db/queries/builds";
+import { getBandsInForce, getCases, getModelKeys, type CaseRow } from "@/db/queries/library";
+import { getRecentValues, getValuesOfBuild, insertQuantityValues, seriesKey } from "@/db/queries/quantity-values";
+import { deleteRunByKey, insertRun, insertRunData } from "@/db/queries/runs";
+import { deriveRunQuantities, type RunDerivation } from "@/lib/evaluation/derive";
+import { DRIFT_WINDOW, judgeRun } from "@/lib/evaluation/judge";
+import type { BandInForce, FitSettings } from "@/lib/evaluation/types";
+import { AppError, formatPath, type FieldIssue } from "@/lib/errors";
+import { submissionSchema, type ResultSubmission, type RunSubmission } from "@/lib/validation/submission";
+import { actorUserId, type Actor } from "./actor";
+import { requireSubmitter } from "./authorize";
+
+export interface SubmissionResult {
+  buildId: number;
+  runIds: number[];
+  created: boolean;
+}
+
+/**
+ * The one ingest path (CI mutation, manual upload, demo seed): validate, derive,
+ * then store raw data, judged quantities and the build verdict in ONE transaction,
+ * so a failure anywhere leaves nothing of the submission behind. Re-posting the
+ * same commit replaces the runs with the same case × model × grid.
+ */
+export async function submitResults({
+  actor,
+  unsafeInput,
+  receivedAt,
+}: {
+  actor: Actor | null;
+  unsafeInput: unknown;
+  /** Only the demo seed back-dates builds; CI posts are stamped by the database. */
+  receivedAt?: Date;
+}): Promise<SubmissionResult> {
+  requireSubmitter(actor);
+  const input = parseSubmission(unsafeInput);
+  const db = getDb();
+
+  const [cases, modelKeys] = await Promise.all([
+    getCases({ db, keys: [...new Set(input.runs.map((r) => r.case))] }),
+    getModelKeys({ db }),
+  ]);
+  const caseByKey = new Map(cases.map((c) => [c.key, c]));
+  checkReferences(input, caseByKey, modelKeys);
+
+  const bands = await getBandsInForce({ db, caseKeys: [...caseByKey.keys()], at: receivedAt });
+  const derived = input.runs.map((run) => deriveRunQuantities(run, settingsLookup(run, caseByKey.get(run.case)!, bands)));
+
+  return db.transaction(async (trx) => {
+    const { row: build, created } = await upsertBuildForUpdate({ db: trx, build: input.build, receivedAt });
+    if (build.branch !== input.build.branch) {
+      throw new AppError("conflict", `Build ${build.commit} was first posted on branch ${build.branch}.`, [
+        { path: "input.build.branch", message: `must be ${build.branch} for commit ${build.commit}` },
+      ]);
+    }
+    const baseline = await getBaselineBuild({ db: trx, branch: build.branch, before: build.received_at, excludeId: build.id });
+    const baselineValues = baseline ? await getValuesOfBuild({ db: trx, buildId: baseline.id }) : new Map<string, number | null>();
+    const history = await getRecentValues({
+      db: trx,
+      branch: build.branch,
+      before: build.received_at,
+      runKeys: input.runs.map((r) => ({ caseKey: r.case, modelKey: r.model, grid: r.grid })),
+      perKey: DRIFT_WINDOW - 1,
+    });
+
+    const runIds: number[] = [];
+    for (let i = 0; i < input.runs.length; i++) {
+      const run = input.runs[i];
+      runIds.push(
+        await storeRun(trx, {
+          build,
+          run,
+          derivation: derived[i],
+          bands: bandsForRun(run, bands),
+          baseline: baseline ? { buildId: baseline.id, values: baselineValues } : null,
+          history,
+        }),
+      );
+    }
+
+    const verdict = await setBuildVerdict({ db: trx, buildId: build.id });
+    await trx("submissions").insert({
+      build_id: build.id,
+      ci_token_id: actor.kind === "ci" ? actor.tokenId : null,
+      user_id: actorUserId(actor),
+      run_count: input.runs.length,
+      ...(receivedAt ? { received_at: receivedAt } : {}),
+    });
+    await insertAuditEntry({
+      db: trx,
+      entry: {
+        actorUserId: actorUserId(actor),
+        actorLabel: actor.label,
+        action: created ? "build.submitted" : "build.resubmitted",
+        entity: "build",
+        entityId: build.id,
+        details: { commit: build.commit, branch: build.branch, runs: input.runs.length, verdict },
+        at: receivedAt,
+      },
+    });
+    return { buildId: build.id, runIds, created };
+  });
+}
+
+export function parseSubmission(unsafeInput: unknown): ResultSubmission {
+  const parsed = submissionSchema.safeParse(unsafeInput);
+  if (parsed.success) return parsed.data;
+  const issues: FieldIssue[] = parsed.error.issues.slice(0, 50).map((i) => ({ path: formatPath(i.path, "input"), message: i.message }));
+  throw new AppError("invalid_input", describeIssues(issues), issues);
+}
+
+function describeIssues(issues: FieldIssue[]): string {
+  const head = issues.slice(0, 3).map((i) => `${i.path} ${i.message}`).join("; ");
+  return issues.length > 3 ? `${head}; and ${issues.length - 3} more` : head;
+}
+
+function checkReferences(input: ResultSubmission, cases: Map<string, CaseRow>, models: Set<string>) {
+  const issues: FieldIssue[] = [];
+  input.runs.forEach((run, i) => {
+    if (!cases.has(run.case)) issues.push({ path: `input.runs[${i}].case`, message: `is not a known case: "${run.case}"` });
+    if (!models.has(run.model)) issues.push({ path: `input.runs[${i}].model`, message: `is not a known turbulence model: "${run.model}"` });
+  });
+  if (issues.length) throw new AppError("invalid_input", describeIssues(issues), issues);
+}
+
+/** The model's own band for a quantity, else the case-wide one. */
+function bandsForRun(run: RunSubmission, bands: BandInForce[]): Map<string, BandInForce> {
+  const out = new Map<string, BandInForce>();
+  for (const b of bands) {
+    if (b.caseKey !== run.case) continue;
+    if (b.modelKey === null && !out.has(b.quantityKey)) out.set(b.quantityKey, b);
+    if (b.modelKey === run.model) out.set(b.quantityKey, b);
+  }
+  return out;
+}
+
+function settingsLookup(run: RunSubmission, caseRow: CaseRow, bands: BandInForce[]) {
+  const own = bandsForRun(run, bands);
+  return (key: string): FitSettings => ({ ...caseRow.parameters, ...(own.get(key)?.fitSettings ?? {}) });
+}
+
+async function storeRun(
+  trx: Parameters<Parameters<ReturnType<typeof getDb>["transaction"]>[0]>[0],
+  ctx: {
+    build: { id: number; branch: string; received_at: Date };
+    run: RunSubmission;
+    derivation: RunDerivation;
+    bands: Map<string, BandInForce>;
+    baseline: { buildId: number; values: Map<string, number | null> } | null;
+    history: Map<string, number[]>;
+  },
+): Promise<number> {
+  const { build, run, derivation, bands, baseline, history } = ctx;
+  const key = (q: string) => seriesKey(run.case, run.model, run.grid, q);
+  const judged = judgeRun({
+    status: run.status,
+    quantities: derivation.quantities,
+    bandFor: (q) => bands.get(q) ?? null,
+    expectedKeys: [...bands.keys()],
+    baseline: baseline && {
+      buildId: baseline.buildId,
+      values: new Map([...bands.keys(), ...derivation.quantities.map((q) => q.key)].map((q) => [q, baseline.values.get(key(q)) ?? null])),
+    },
+    history: (q) => history.get(key(q)) ?? [],
+  });
+
+  await deleteRunByKey({ db: trx, buildId: build.id, run });
+  const runId = await insertRun({ db: trx, buildId: build.id, run, verdict: judged.verdict });
+  await insertRunData({ db: trx, runId, run, stresses: derivation.stresses, gridStudy: derivation.gridStudy });
+  await insertQuantityValues({
+    db: trx,
+    run: { id: runId, buildId: build.id, caseKey: run.case, modelKey: run.model, grid: run.grid, branch: build.branch, buildReceivedAt: build.received_at },
+    quantities: judged.quantities,
+  });
+  return runId;
+}
