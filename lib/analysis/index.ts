@@ -3,3 +3,5 @@ export { AnalysisError } from "./errors";
 export * from "./wall-laws";
 export * from "./decay-models";
 export * from "./skin-friction";
+export * from "./log-law";
+export * from "./decay";
