@@ -5,3 +5,4 @@ export * from "./decay-models";
 export * from "./skin-friction";
 export * from "./log-law";
 export * from "./decay";
+export * from "./verdict";
