@@ -1,0 +1,28 @@
+import { requireEnv } from "./env";
+
+/**
+ * Signs in through next-auth's credentials endpoint exactly as the browser form
+ * does (CSRF token first) and returns the session cookie header.
+ */
+export async function signIn(email: string, password = requireEnv("TAULINE_DEMO_PASSWORD")): Promise<string> {
+  const base = requireEnv("TAULINE_TEST_URL");
+  const csrfRes = await fetch(`${base}/api/auth/csrf`);
+  const { csrfToken } = (await csrfRes.json()) as { csrfToken: string };
+  const jar = cookiesOf(csrfRes);
+  const res = await fetch(`${base}/api/auth/callback/credentials`, {
+    method: "POST",
+    redirect: "manual",
+    headers: { "content-type": "application/x-www-form-urlencoded", cookie: jar },
+    body: new URLSearchParams({ csrfToken, email, password, json: "true" }),
+  });
+  const cookies = cookiesOf(res);
+  if (!/next-auth\.session-token=/.test(cookies)) throw new Error(`sign-in as ${email} failed (${res.status})`);
+  return [jar, cookies].filter(Boolean).join("; ");
+}
+
+function cookiesOf(res: Response): string {
+  return res.headers
+    .getSetCookie()
+    .map((c) => c.split(";")[0])
+    .join("; ");
+}
