@@ -95,8 +95,8 @@ const gridStudySchema = z
     }
   });
 
-const namedValue = (name: "key" | "name") =>
-  z.object({ [name]: name === "key" ? quantityKey : label(64), value: finiteNumber } as Record<string, z.ZodType>);
+const reportedQuantity = z.object({ key: quantityKey, value: finiteNumber });
+const coefficient = z.object({ name: label(64), value: finiteNumber });
 
 export const runInputSchema = z
   .object({
@@ -106,12 +106,12 @@ export const runInputSchema = z
     status: z.enum(["COMPLETED", "DIVERGED", "CRASHED", "TIMEOUT"]),
     iterations: z.number().int().min(0, "must not be negative").nullish(),
     wallSeconds: finiteNumber.pipe(z.number().min(0, "must not be negative")).nullish(),
-    quantities: z.array(namedValue("key") as z.ZodType<{ key: string; value: number }>).max(SUBMISSION_LIMITS.quantitiesPerRun).nullish(),
+    quantities: z.array(reportedQuantity).max(SUBMISSION_LIMITS.quantitiesPerRun).nullish(),
     series: z.array(seriesSchema).max(SUBMISSION_LIMITS.seriesPerRun).nullish(),
     stresses: z.array(stressSampleSchema).max(SUBMISSION_LIMITS.stressSamplesPerRun).nullish(),
     gridStudy: gridStudySchema.nullish(),
     coefficients: z
-      .array(namedValue("name") as z.ZodType<{ name: string; value: number }>)
+      .array(coefficient)
       .max(SUBMISSION_LIMITS.coefficientsPerRun)
       .nullish(),
   })
