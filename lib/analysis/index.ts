@@ -6,3 +6,5 @@ export * from "./skin-friction";
 export * from "./log-law";
 export * from "./decay";
 export * from "./verdict";
+export * from "./skin-friction-analysis";
+export * from "./residuals";
