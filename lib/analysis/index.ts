@@ -8,3 +8,4 @@ export * from "./decay";
 export * from "./verdict";
 export * from "./skin-friction-analysis";
 export * from "./residuals";
+export * from "./realizability";
