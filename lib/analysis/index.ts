@@ -9,3 +9,4 @@ export * from "./verdict";
 export * from "./skin-friction-analysis";
 export * from "./residuals";
 export * from "./realizability";
+export * from "./grid-convergence";
