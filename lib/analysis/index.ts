@@ -10,3 +10,5 @@ export * from "./skin-friction-analysis";
 export * from "./residuals";
 export * from "./realizability";
 export * from "./grid-convergence";
+export * from "./drift";
+export { erfc, normalCdf } from "./normal-distribution";
