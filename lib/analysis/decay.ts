@@ -1,7 +1,7 @@
 import { AnalysisError } from "./errors";
 import { decaySse, refineDecayFit } from "./decay-refine";
 import { LineAccumulator } from "./linear-fit";
-import { assertFiniteNumber, assertPairedSeries, assertStrictlyIncreasing } from "./validate";
+import { assertFiniteNumber, assertSeries } from "./validate";
 
 export interface DecayFit {
   /** Decay exponent in k = A (t - t0)^-n. */
@@ -40,8 +40,7 @@ export function fitDecayExponent(
   k: ArrayLike<number>,
   opts: { tMin?: number; tMax?: number } = {},
 ): DecayFit {
-  assertPairedSeries(t, k, "t", "k");
-  assertStrictlyIncreasing(t, "t");
+  assertSeries(t, k, "t", "k", { increasing: true });
   for (let i = 0; i < k.length; i++) {
     if (!(k[i] > 0)) throw new AnalysisError("k", `element ${i} must be > 0 (${k[i]})`);
   }

@@ -1,6 +1,6 @@
 import { AnalysisError } from "./errors";
 import { LineAccumulator } from "./linear-fit";
-import { assertPairedSeries, assertPositiveNumber, assertStrictlyIncreasing } from "./validate";
+import { assertPositiveNumber, assertSeries } from "./validate";
 
 export interface ResidualOptions {
   /** Total drop (orders of magnitude) regarded as converged; default 5 (sheet §10). */
@@ -36,8 +36,7 @@ export function residualDropOrders(
   residual: ArrayLike<number>,
   opts: ResidualOptions = {},
 ): ResidualSummary {
-  assertPairedSeries(iteration, residual, "iteration", "residual");
-  assertStrictlyIncreasing(iteration, "iteration");
+  assertSeries(iteration, residual, "iteration", "residual", { increasing: true });
   const n = residual.length;
   if (n < 2) throw new AnalysisError("residual", `needs at least 2 samples, got ${n}`);
   for (let i = 0; i < n; i++) {

@@ -1,5 +1,5 @@
 import { AnalysisError } from "./errors";
-import { assertFiniteNumber, assertPairedSeries, assertStrictlyIncreasing } from "./validate";
+import { assertFiniteNumber, assertSeries } from "./validate";
 
 // Quantities read off a wall skin-friction distribution c_f(x): the value at a
 // monitoring station (e.g. TMR flat plate x = 0.97, sheet §7.2) and the
@@ -12,8 +12,7 @@ import { assertFiniteNumber, assertPairedSeries, assertStrictlyIncreasing } from
  * [x_first, x_last] is an error because extrapolating c_f is not a measurement.
  */
 export function cfAtX(x: ArrayLike<number>, cf: ArrayLike<number>, xStation: number): number {
-  assertPairedSeries(x, cf, "x", "cf");
-  assertStrictlyIncreasing(x, "x");
+  assertSeries(x, cf, "x", "cf", { increasing: true });
   assertFiniteNumber(xStation, "xStation");
   const n = x.length;
   if (xStation < x[0] || xStation > x[n - 1]) {
@@ -47,8 +46,7 @@ export function findReattachment(
   x: ArrayLike<number>,
   cf: ArrayLike<number>,
 ): { xr: number | null; crossings: number[] } {
-  assertPairedSeries(x, cf, "x", "cf");
-  assertStrictlyIncreasing(x, "x");
+  assertSeries(x, cf, "x", "cf", { increasing: true });
   const crossings: number[] = [];
   const n = x.length;
   let i = 0;
