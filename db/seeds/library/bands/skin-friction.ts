@@ -17,12 +17,13 @@ const CF_NOISE_FLOOR = 3e-6;
 export const SKIN_FRICTION_BANDS: BandDefinition[] = [
   {
     caseKey: "flat-plate-zpg", quantityKey: "cf_at_x", model: null, kind: "validation",
-    reference: CORRELATION_MEAN, lower: 0.00265, upper: 0.00288, marginalMargin: 2e-5, noiseFloor: CF_NOISE_FLOOR,
+    // Limits: the lowest and highest correlation (0.0026501, 0.0028811), rounded outward.
+    reference: CORRELATION_MEAN, lower: 0.00265, upper: 0.002882, marginalMargin: 2e-5, noiseFloor: CF_NOISE_FLOOR,
     source:
       "Local c_f correlations at Re_x = 4.8504e6: 1/7 power laws (0.0576, 0.0592 Re_x^−1/5), Schlichting, " +
       "White (from memory), Schultz-Grunow, von Kármán 1934 (reference sheet §6); reference = their mean, limits = their spread",
     reason:
-      "Validation against the turbulent flat-plate correlations; their spread (0.00265–0.00288, about ±4 %) " +
+      "Validation against the turbulent flat-plate correlations; their spread (0.00265–0.002881, about ±4 %) " +
       "is the uncertainty of the empirical reference itself.",
   },
   {
