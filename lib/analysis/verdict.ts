@@ -23,10 +23,10 @@ export const VERDICT_ORDER: readonly Verdict[] = ["within", "unbanded", "margina
 /**
  * Judges a value against a band. Rules, in order: no band -> unbanded; no value
  * (null, undefined, NaN, ±Infinity) -> missing; strictly below lower or above
- * upper -> outside; otherwise, closer than marginalMargin to a finite limit ->
- * marginal; else within. A value exactly on a limit is inside (acceptance limits
- * are inclusive) and therefore marginal whenever the margin is positive; at
- * exactly marginalMargin from a limit it is within.
+ * upper -> outside; otherwise, with a positive marginalMargin, at most that far
+ * from a finite limit -> marginal; else within. A value exactly on a limit is
+ * inside (acceptance limits are inclusive), so it is marginal when the margin is
+ * positive and within when the margin is 0 (no marginal strip).
  */
 export function judgeValue(value: number | null | undefined, band: BandLimits | null): Verdict {
   if (band === null || band === undefined) return "unbanded";
@@ -40,7 +40,9 @@ export function judgeValue(value: number | null | undefined, band: BandLimits | 
     throw new AnalysisError("band", `lower limit ${lower} exceeds upper limit ${upper}`);
   }
   if ((lower !== null && value < lower) || (upper !== null && value > upper)) return "outside";
-  if ((lower !== null && value - lower < margin) || (upper !== null && upper - value < margin)) return "marginal";
+  if (margin > 0 && ((lower !== null && value - lower <= margin) || (upper !== null && upper - value <= margin))) {
+    return "marginal";
+  }
   return "within";
 }
 

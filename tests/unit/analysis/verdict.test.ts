@@ -22,10 +22,11 @@ describe("judgeValue", () => {
     expect(judgeValue(1.08, { ...DECAY_BAND, marginalMargin: 0 })).toBe("within");
   });
 
-  it("is marginal inside the margin next to either limit and within at exactly the margin", () => {
+  it("is marginal within the margin of either limit, the margin itself included", () => {
     expect(judgeValue(1.081, DECAY_BAND)).toBe("marginal");
     expect(judgeValue(1.093, DECAY_BAND)).toBe("marginal");
-    expect(judgeValue(0.5, { lower: 0, upper: 1, marginalMargin: 0.5 })).toBe("within");
+    expect(judgeValue(0.5, { lower: 0, upper: 1, marginalMargin: 0.5 })).toBe("marginal");
+    expect(judgeValue(0.5, { lower: 0, upper: 1, marginalMargin: 0.25 })).toBe("within");
   });
 
   it("treats a null limit as open (one-sided bands)", () => {
