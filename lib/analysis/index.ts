@@ -4,6 +4,7 @@ export * from "./wall-laws";
 export * from "./decay-models";
 export * from "./skin-friction";
 export * from "./log-law";
+export * from "./diagnostic-function";
 export * from "./decay";
 export * from "./verdict";
 export * from "./skin-friction-analysis";

@@ -1,5 +1,5 @@
 import { AnalysisError } from "./errors";
-import { assertPairedSeries } from "./validate";
+import { assertSeries } from "./validate";
 
 /**
  * Theil–Sen line (Theil 1950; Sen 1968): slope = median of the pairwise slopes
@@ -7,7 +7,7 @@ import { assertPairedSeries } from "./validate";
  * y - slope x. Robust to outliers; O(n^2) memory, meant for short build windows.
  */
 export function theilSen(x: ArrayLike<number>, y: ArrayLike<number>): { slope: number; intercept: number } {
-  assertPairedSeries(x, y, "x", "y");
+  assertSeries(x, y, "x", "y");
   const n = x.length;
   const slopes = new Float64Array((n * (n - 1)) / 2);
   let count = 0;

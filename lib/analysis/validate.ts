@@ -26,24 +26,6 @@ export function assertFiniteArray(values: ArrayLike<number>, subject: string): v
   }
 }
 
-/** Checks both arrays are finite and of equal, non-zero length. */
-export function assertPairedSeries(
-  x: ArrayLike<number>,
-  y: ArrayLike<number>,
-  xSubject: string,
-  ySubject: string,
-): void {
-  assertFiniteArray(x, xSubject);
-  assertFiniteArray(y, ySubject);
-  if (x.length !== y.length) {
-    throw new AnalysisError(
-      ySubject,
-      `length ${y.length} differs from ${xSubject} length ${x.length}`,
-    );
-  }
-  if (x.length === 0) throw new AnalysisError(xSubject, "is empty");
-}
-
 /**
  * One-pass check of a paired series: equal non-zero lengths, every element
  * finite, and (optionally) x strictly increasing. Fused into a single loop so
@@ -56,11 +38,8 @@ export function assertSeries(
   ySubject: string,
   opts: { increasing?: boolean } = {},
 ): void {
-  if (x == null || typeof x.length !== "number") throw new AnalysisError(xSubject, "must be an array of numbers");
-  if (y == null || typeof y.length !== "number") throw new AnalysisError(ySubject, "must be an array of numbers");
+  assertSameLength(x, y, xSubject, ySubject);
   const n = x.length;
-  if (y.length !== n) throw new AnalysisError(ySubject, `length ${y.length} differs from ${xSubject} length ${n}`);
-  if (n === 0) throw new AnalysisError(xSubject, "is empty");
   const increasing = opts.increasing === true;
   let previous = -Infinity;
   for (let i = 0; i < n; i++) {
@@ -77,13 +56,10 @@ export function assertSeries(
   }
 }
 
-export function assertStrictlyIncreasing(x: ArrayLike<number>, subject: string): void {
-  for (let i = 1; i < x.length; i++) {
-    if (!(x[i] > x[i - 1])) {
-      throw new AnalysisError(
-        subject,
-        `must be strictly increasing; element ${i} (${x[i]}) <= element ${i - 1} (${x[i - 1]})`,
-      );
-    }
-  }
+/** Both inputs are array-like, of equal and non-zero length (elements unchecked). */
+export function assertSameLength(x: ArrayLike<number>, y: ArrayLike<number>, xSubject: string, ySubject: string): void {
+  if (x == null || typeof x.length !== "number") throw new AnalysisError(xSubject, "must be an array of numbers");
+  if (y == null || typeof y.length !== "number") throw new AnalysisError(ySubject, "must be an array of numbers");
+  if (y.length !== x.length) throw new AnalysisError(ySubject, `length ${y.length} differs from ${xSubject} length ${x.length}`);
+  if (x.length === 0) throw new AnalysisError(xSubject, "is empty");
 }

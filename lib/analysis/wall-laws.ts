@@ -37,7 +37,9 @@ export function spaldingUPlus(yPlus: number, kappa = 0.41, b = 5.0): number {
   if (yPlus === 0) return 0;
   const e = Math.exp(-kappa * b);
   let lo = 0;
-  let hi = yPlus;
+  // For kappa u+ >= 8 the bracket term exceeds exp(kappa u+)/2, so the root also
+  // lies below ln(2 y+/E)/kappa (written to avoid overflow of 2 y+).
+  let hi = Math.min(yPlus, Math.max(8 / kappa, (Math.LN2 + Math.log(yPlus) + kappa * b) / kappa));
   // Start from the viscous line below the buffer layer, the log law above it.
   let u = yPlus < 10 ? yPlus : Math.min(hi, Math.max(lo, Math.log(yPlus) / kappa + b));
   for (let iter = 0; iter < 200; iter++) {

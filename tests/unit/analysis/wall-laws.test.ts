@@ -58,6 +58,10 @@ describe("spaldingUPlus", () => {
     }
   });
 
+  it("stays finite and on the log law at an extreme y+ of 1e300", () => {
+    expect(Math.abs(spaldingUPlus(1e300) - logLawUPlus(1e300))).toBeLessThan(1e-9);
+  });
+
   it("follows the viscous line u+ = y+ very near the wall and is exactly 0 at the wall", () => {
     // Series of the formula: y+ = u+ + E (kappa u+)^4/24 + ..., so u+ -> y+ (common practice).
     expect(spaldingUPlus(0)).toBe(0);
