@@ -2,6 +2,8 @@ import { AnalysisError } from "./errors";
 import { LineAccumulator } from "./linear-fit";
 import { assertPositiveNumber, assertSameLength } from "./validate";
 
+const WINDOW_ROUND_OFF = 1e-9;
+
 export interface LogLawWindow {
   yPlusMin: number;
   yPlusMax: number;
@@ -20,7 +22,8 @@ export interface LogLawFit {
 
 /**
  * Ordinary least squares of u+ on ln y+ over the samples with
- * yPlusMin <= y+ <= yPlusMax: slope = 1/kappa, intercept = B. Samples need not be
+ * yPlusMin <= y+ <= yPlusMax (inclusive, to a relative 1e-9 for round-off):
+ * slope = 1/kappa, intercept = B. Samples need not be
  * sorted. Samples outside the window (including a wall point at y+ = 0) are
  * ignored, but a negative y+ is rejected as corrupt input. Note (sheet §1.4) that
  * composite laws such as Spalding's approach the log law slowly, so the fitted
@@ -38,8 +41,11 @@ export function fitLogLaw(
     throw new AnalysisError("window", `yPlusMax (${window.yPlusMax}) must exceed yPlusMin (${window.yPlusMin})`);
   }
   const acc = new LineAccumulator();
-  const lo = window.yPlusMin;
-  const hi = window.yPlusMax;
+  // Inclusive bounds, widened by round-off: a grid generated as exp(ln a + i h)
+  // lands a few ulps off its end points, and dropping an end sample shifts the
+  // fitted kappa by ~1e-4 (sheet §1.4 windows), far more than the grid noise.
+  const lo = window.yPlusMin * (1 - WINDOW_ROUND_OFF);
+  const hi = window.yPlusMax * (1 + WINDOW_ROUND_OFF);
   // Validation is fused into the fitting pass: one loop over the data.
   for (let i = 0; i < yPlus.length; i++) {
     const y = yPlus[i];

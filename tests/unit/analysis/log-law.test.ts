@@ -114,6 +114,12 @@ describe("fitLogLaw arithmetic", () => {
     expect(fit.yPlusMax).toBe(300);
   });
 
+  it("keeps end samples that sit a few ulps outside the window (round-off of a generated grid)", () => {
+    const y = [30 * (1 - 1e-15), 100, 300 * (1 + 4e-16)];
+    expect(fitLogLaw(y, y.map((v) => logLawUPlus(v)), { yPlusMin: 30, yPlusMax: 300 }).points).toBe(3);
+    expect(() => fitLogLaw([29.9, 100, 301], [1, 2, 3], { yPlusMin: 30, yPlusMax: 300 })).toThrow(AnalysisError);
+  });
+
   it("gives the same answer for Float64Array and number[] input", () => {
     const y = logSpace(30, 300, 50);
     const u = mapSeries(y, (v) => spaldingUPlus(v));
