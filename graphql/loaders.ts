@@ -22,7 +22,7 @@ export function createLoaders(db: Db) {
       const map = new Map(rows.map((r) => [r.id, r]));
       return ids.map((id) => map.get(id) ?? null);
     });
-  const groupedBy = <T, K extends keyof T>(key: K, fetch: (ids: readonly number[]) => Promise<T[]>) =>
+  const groupedBy = <T extends Record<K, unknown>, K extends string>(key: K, fetch: (ids: readonly number[]) => Promise<T[]>) =>
     new DataLoader<number, T[]>(async (ids) => {
       const rows = await fetch(ids);
       const map = new Map<number, T[]>();

@@ -1,4 +1,4 @@
-import type { Verdict } from "@/lib/analysis/verdict";
+import type { Verdict } from "@/lib/analysis";
 
 const STYLES: Record<Verdict, string> = {
   within: "bg-verdict-within/15 text-verdict-within ring-verdict-within/40",

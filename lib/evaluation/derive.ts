@@ -12,7 +12,18 @@ import {
 import type { RunSubmission } from "@/lib/validation/submission";
 import type { DerivedQuantity, FitSettings } from "./types";
 
-export type StressAnalysis = ReturnType<typeof analyseStressSample>;
+/** What is stored per stress sample; invariants are null when k <= 0 leaves b undefined. */
+export interface StressAnalysis {
+  k: number;
+  ii: number | null;
+  iii: number | null;
+  eta: number | null;
+  xi: number | null;
+  f: number | null;
+  barycentric: { x: number; y: number } | null;
+  realizable: boolean;
+  violations: string[];
+}
 export type GridStudyAnalysis = ReturnType<typeof analyseGridStudy>;
 
 export interface RunDerivation {
@@ -79,7 +90,7 @@ export function deriveRunQuantities(run: RunSubmission, settingsFor: (key: strin
     });
   }
 
-  const stresses = (run.stresses ?? []).map((s) => analyseStressSample(s));
+  const stresses = (run.stresses ?? []).map(analyseStress);
   if (run.stresses && run.stresses.length > 0) {
     const bad = stresses.filter((s) => !s.realizable).length;
     out.push({
@@ -109,6 +120,19 @@ export function deriveRunQuantities(run: RunSubmission, settingsFor: (key: strin
   }
 
   return { quantities: mergeReported(run, out), stresses, gridStudy };
+}
+
+// A sample whose trace is not positive cannot be normalised into b_ij. The zero
+// tensor is positive semi-definite (no turbulence: realizable, no invariants);
+// any other tensor with tr R <= 0 has a negative eigenvalue and is not realizable.
+function analyseStress(sample: { uu: number; vv: number; ww: number; uv: number; uw: number; vw: number }): StressAnalysis {
+  const trace = sample.uu + sample.vv + sample.ww;
+  if (!(trace > 0)) {
+    const zero = [sample.uu, sample.vv, sample.ww, sample.uv, sample.uw, sample.vw].every((v) => v === 0);
+    const violations = zero ? [] : ["non-positive trace: tr R <= 0 with a non-zero tensor"];
+    return { k: trace / 2, ii: null, iii: null, eta: null, xi: null, f: null, barycentric: null, realizable: zero, violations };
+  }
+  return analyseStressSample(sample);
 }
 
 function attempt(out: DerivedQuantity[], keys: string[], compute: () => { value: number; details: Record<string, unknown> }[]) {

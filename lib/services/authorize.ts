@@ -15,7 +15,7 @@ export function requirePerson(actor: Actor | null, needed: Role = "developer"): 
   if (!roleAllows(actor.role, needed)) throw new AppError("forbidden", `This needs the ${needed} role; you have ${actor.role}.`);
 }
 
-export function requireSubmitter(actor: Actor | null): void {
+export function requireSubmitter(actor: Actor | null): asserts actor is Actor {
   requireSignedIn(actor);
   if (actor.kind === "ci" || actor.kind === "system") return;
   // People may upload manual runs through the same contract (developer and up).
