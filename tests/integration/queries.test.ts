@@ -32,7 +32,7 @@ describe("queries for the pages", () => {
   });
 
   it("returns one build with its runs, quantities and plotted series", async () => {
-    const list = await postGraphQL<BuildsData>({ query: "{ builds(first: 1) { items { id } } }", cookie: developer });
+    const list = await postGraphQL<BuildsData>({ query: `{ builds(branch: "main", first: 1) { items { id } } }`, cookie: developer });
     const id = list.body.data!.builds.items[0].id;
     const res = await postGraphQL<{ build: { id: string; runs: { case: string; quantities: { key: string; verdict: string }[]; series: { key: string; x: number[]; y: number[] }[] }[] } }>({
       query: `query($id: ID!) { build(id: $id) { id verdict gate runs { case model verdict quantities { key value verdict reference source lower upper } series { key x y } } } }`,
