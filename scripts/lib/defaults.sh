@@ -1,0 +1,28 @@
+# shellcheck shell=bash
+# The one place where the development and test defaults live. Every value can
+# be overridden from the environment; README documents the demo credentials.
+# Sourced by scripts/start.sh, scripts/stop.sh and scripts/test.sh.
+
+# PostgreSQL cluster of our own (not Debian's default 5432 cluster).
+: "${PGPORT_TAULINE:=54329}"
+: "${TAULINE_DB_NAME:=tauline}"
+TAULINE_DB_ROLE=tauline
+
+# Web server and SMTP fake for `npm start`.
+: "${PORT:=3000}"
+: "${SMTP_PORT:=2525}"
+
+# Ports for `npm test`, kept apart so tests can run while `npm start` serves.
+: "${TAULINE_TEST_PORT:=3100}"
+: "${TAULINE_TEST_SMTP_PORT:=2526}"
+
+# Demo credentials seeded by db/seed.ts: invented, for the local demo only.
+: "${TAULINE_CI_TOKEN:=tauline-demo-ci-token}"
+: "${TAULINE_DEMO_PASSWORD:=cormorant-demo}"
+
+MAIL_FROM_DEFAULT="Tauline <tauline@fenwick-hydro.test>"
+DEMO_USERS=(developer qa release admin)
+DEMO_DOMAIN=fenwick-hydro.test
+
+# Seconds to wait for /api/health after `next start`.
+: "${TAULINE_HEALTH_TIMEOUT:=120}"
