@@ -18,10 +18,11 @@ clean_up_test_run() {
     stop_pg_after_test
     release_lock 8
   fi
-  if [ "$vitest_status" = 0 ]; then
-    rm -rf "$test_mail_dir"
-  elif [ -d "$test_mail_dir" ]; then
+  # The mail of a failed run helps to see why; otherwise it is thrown away.
+  if [ "$vitest_status" != 0 ] && [ -n "$(ls -A "$test_mail_dir" 2>/dev/null)" ]; then
     say "kept the mail of this failed run in $test_mail_dir"
+  else
+    rm -rf "$test_mail_dir"
   fi
   exit "$status"
 }
