@@ -2,6 +2,7 @@
 # The one place where the development and test defaults live. Every value can
 # be overridden from the environment; README documents the demo credentials.
 # Sourced by scripts/start.sh, scripts/stop.sh and scripts/test.sh.
+# shellcheck disable=SC2034  # the other libraries read these
 
 # PostgreSQL cluster of our own (not Debian's default 5432 cluster).
 : "${PGPORT_TAULINE:=54329}"

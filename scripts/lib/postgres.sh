@@ -6,9 +6,11 @@
 # Sets PG_BIN to a folder holding initdb, pg_ctl and psql of one version;
 # installs Debian's postgresql package when none is found.
 find_pg_bin() {
-  local candidate
-  for candidate in "$(command -v pg_ctl 2>/dev/null)" $(ls -d /usr/lib/postgresql/*/bin/pg_ctl 2>/dev/null | sort -V -r); do
-    [ -n "$candidate" ] || continue
+  local candidate installed
+  # Newest Debian-packaged version first.
+  installed="$(printf '%s\n' /usr/lib/postgresql/*/bin/pg_ctl | sort -V -r)"
+  for candidate in "$(command -v pg_ctl 2>/dev/null)" $installed; do
+    [ -e "$candidate" ] || continue
     candidate="$(dirname "$(readlink -f "$candidate")")"
     if [ -x "$candidate/initdb" ] && [ -x "$candidate/pg_ctl" ] && [ -x "$candidate/psql" ]; then
       PG_BIN="$candidate"
@@ -44,6 +46,7 @@ as_pg() {
 # True when the cluster's OS user can enter folder $1 (and so every parent).
 pg_user_can_enter() {
   if is_root; then
+    # shellcheck disable=SC2016  # $1 expands in the inner shell
     runuser -u postgres -- /bin/sh -c 'test -x "$1"' sh "$1" 2>/dev/null
   else
     test -x "$1"

@@ -27,6 +27,7 @@ start_detached() {
   # reader would wait for it) or the lock descriptors 8 and 9.
   (
     cd "$TAULINE_ROOT" || exit 1
+    # shellcheck disable=SC2016  # $$, $0 and $@ belong to the inner shell
     exec setsid bash -c 'echo $$ >"$0"; exec "$@"' "$pid_file" "$@" \
       </dev/null >>"$log_file" 2>&1 8>&- 9>&-
   ) &

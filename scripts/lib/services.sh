@@ -56,6 +56,7 @@ build_web() {
   (cd "$TAULINE_ROOT" && ./node_modules/.bin/next build)
 }
 
+# shellcheck disable=SC2153  # PORT comes from export_app_env
 # start_web PID_FILE LOG_FILE: next start on 127.0.0.1:$PORT, then waits for
 # /api/health to answer 200.
 start_web() {

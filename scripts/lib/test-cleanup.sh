@@ -2,6 +2,7 @@
 # The EXIT trap of scripts/test.sh. Reads the variables test.sh sets:
 # web_pid_file, smtp_pid_file, test_db, db_created, test_mail_dir,
 # vitest_status, PG_STARTED_HERE.
+# shellcheck disable=SC2154  # assigned in scripts/test.sh
 
 clean_up_test_run() {
   local status=$?
