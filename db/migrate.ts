@@ -1,4 +1,5 @@
-import { closeDb, getDb } from "./index";
+import { getDb } from "./index";
+import { runDbScript } from "./run-script";
 
 // Brings the database at DATABASE_URL to the newest migration.
 async function main() {
@@ -7,10 +8,4 @@ async function main() {
   console.log(applied.length ? `migrations: batch ${batch} applied ${applied.join(", ")}` : "migrations: up to date");
 }
 
-main()
-  .then(() => closeDb())
-  .catch(async (error) => {
-    console.error(error instanceof Error ? error.message : error);
-    await closeDb();
-    process.exit(1);
-  });
+runDbScript(main);

@@ -1,4 +1,5 @@
-import { closeDb, getDb } from "./index";
+import { getDb } from "./index";
+import { runDbScript } from "./run-script";
 
 // Drops every table by rolling all migrations back, then migrates again.
 // Run `npm run db:seed` afterwards for the case library and the demo.
@@ -10,10 +11,4 @@ async function main() {
   console.log(`reset: ${applied.length} migrations applied to an empty schema`);
 }
 
-main()
-  .then(() => closeDb())
-  .catch(async (error) => {
-    console.error(error instanceof Error ? error.message : error);
-    await closeDb();
-    process.exit(1);
-  });
+runDbScript(main);

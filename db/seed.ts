@@ -1,4 +1,5 @@
-import { closeDb, getDb } from "./index";
+import { getDb } from "./index";
+import { runDbScript } from "./run-script";
 import { getEnv } from "../lib/env";
 import { seedLibrary } from "./seeds/library";
 import { seedPeople } from "./seeds/people";
@@ -19,10 +20,4 @@ async function main() {
   console.log(builds ? `seed: demo history of ${builds} builds posted in ${((Date.now() - started) / 1000).toFixed(1)} s` : "seed: demo history already present");
 }
 
-main()
-  .then(() => closeDb())
-  .catch(async (error) => {
-    console.error("seed failed:", error instanceof Error ? error.stack ?? error.message : error);
-    await closeDb();
-    process.exit(1);
-  });
+runDbScript(main);
