@@ -1,0 +1,14 @@
+import { withAuth } from "next-auth/middleware";
+
+// Optimistic redirect only: a visitor without a session token is sent to the
+// sign-in page. Every server action and GraphQL resolver checks the session and
+// role again; this is not the guard, just the signpost.
+export default withAuth({
+  pages: { signIn: "/sign-in" },
+});
+
+export const config = {
+  // Everything but sign-in, the auth and GraphQL endpoints (they answer 401 themselves),
+  // health, and static files.
+  matcher: ["/((?!sign-in|api/auth|api/graphql|api/health|_next/static|_next/image|favicon.ico).*)"],
+};
