@@ -1,0 +1,128 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { closeTestDb, testDb } from "../helpers/db";
+import { SUBMIT, ciToken, postGraphQL, randomCommit } from "../helpers/graphql";
+import { signIn } from "../helpers/session";
+
+// The role matrix (DESIGN.md "Who uses it"): every query and mutation, for every
+// kind of caller. Enforced on the server: a refused call is an error with a code
+// and changes nothing.
+
+type Caller = "anonymous" | "ci" | "developer" | "qa" | "release" | "admin";
+const CALLERS: Caller[] = ["anonymous", "ci", "developer", "qa", "release", "admin"];
+const PEOPLE: Caller[] = ["developer", "qa", "release", "admin"];
+
+const cookies: Partial<Record<Caller, string>> = {};
+
+beforeAll(async () => {
+  for (const role of PEOPLE) cookies[role] = await signIn(`${role}@fenwick-hydro.test`);
+});
+afterAll(closeTestDb);
+
+function call(caller: Caller, query: string, variables?: Record<string, unknown>) {
+  if (caller === "anonymous") return postGraphQL({ query, variables });
+  if (caller === "ci") return postGraphQL({ query, variables, token: ciToken() });
+  return postGraphQL({ query, variables, cookie: cookies[caller] });
+}
+
+const bandInput = (reason: string) => ({
+  caseKey: "grid-study",
+  quantityKey: "kappa",
+  model: "lrr",
+  kind: "validation",
+  reference: 0.41,
+  source: "Coles & Hirst 1969 via Pope 2000 (role-matrix test band)",
+  lower: 0.37,
+  upper: 0.44,
+  marginalMargin: 0.005,
+  noiseFloor: 0.002,
+  reason,
+});
+
+interface Operation {
+  name: string;
+  allowed: Caller[];
+  run: (caller: Caller) => ReturnType<typeof call>;
+}
+
+const OPERATIONS: Operation[] = [
+  ...[
+    ["builds", "{ builds(first: 1) { totalCount } }"],
+    ["build", `{ build(id: "1") { id } }`],
+    ["run", `{ run(id: "1") { id } }`],
+    ["branches", "{ branches }"],
+    ["cases", "{ cases { key } }"],
+    ["case", `{ case(key: "backstep") { key } }`],
+    ["models", "{ models { key } }"],
+    ["quantities", "{ quantities { key } }"],
+    ["trend", `{ trend(case: "backstep", quantity: "reattachment_xr_h", model: "sa", branch: "main") { points { value } } }`],
+  ].map(([name, query]) => ({ name, allowed: PEOPLE, run: (c: Caller) => call(c, query) })),
+  { name: "releaseGate", allowed: ["ci", ...PEOPLE], run: (c) => call(c, `{ releaseGate(commit: "abcdef1") { state } }`) },
+  {
+    name: "submitResults",
+    allowed: ["ci", ...PEOPLE],
+    run: (c) => call(c, SUBMIT, { input: { build: { solver: "Cormorant", version: "0.0.0-roles", commit: randomCommit(), branch: "test/roles" }, runs: [{ case: "backstep", model: "sa", status: "COMPLETED" }] } }),
+  },
+  {
+    name: "reviseBand",
+    allowed: ["qa", "admin"],
+    run: (c) => call(c, "mutation($input: BandRevisionInput!) { reviseBand(input: $input) { id version } }", { input: bandInput(`role matrix check by ${c}`) }),
+  },
+];
+
+describe("role matrix", () => {
+  for (const op of OPERATIONS) {
+    for (const caller of CALLERS) {
+      const allowed = op.allowed.includes(caller);
+      it(`${op.name} ${allowed ? "answers" : "refuses"} ${caller}`, async () => {
+        const before = op.name === "reviseBand" ? await testDb()("bands").where({ case_key: "grid-study", quantity_key: "kappa", model_key: "lrr" }).count<{ count: string }[]>({ count: "*" }) : null;
+        const res = await op.run(caller);
+        if (allowed) {
+          expect(res.body.errors ?? []).toEqual([]);
+        } else {
+          const code = res.body.errors?.[0]?.extensions?.code;
+          expect(code).toBe(caller === "anonymous" ? "UNAUTHENTICATED" : "FORBIDDEN");
+          expect(res.status).toBe(caller === "anonymous" ? 401 : 403);
+          if (before) {
+            const after = await testDb()("bands").where({ case_key: "grid-study", quantity_key: "kappa", model_key: "lrr" }).count<{ count: string }[]>({ count: "*" });
+            expect(after[0].count).toBe(before[0].count);
+          }
+        }
+      });
+    }
+  }
+});
+
+describe("reviseBand", () => {
+  it("writes a new version, closes the old one and records the change in the audit log", async () => {
+    const qa = cookies.qa!;
+    const first = await postGraphQL<{ reviseBand: { id: string; version: number } }>({
+      query: "mutation($input: BandRevisionInput!) { reviseBand(input: $input) { id version lower upper } }",
+      variables: { input: bandInput("initial band for the versioning test") },
+      cookie: qa,
+    });
+    const second = await postGraphQL<{ reviseBand: { id: string; version: number; lower: number } }>({
+      query: "mutation($input: BandRevisionInput!) { reviseBand(input: $input) { id version lower upper } }",
+      variables: { input: { ...bandInput("tightened after the closure review"), lower: 0.38 } },
+      cookie: qa,
+    });
+    expect(second.body.errors).toBeUndefined();
+    expect(second.body.data!.reviseBand.version).toBe(first.body.data!.reviseBand.version + 1);
+    const rows = await testDb()("bands").where({ case_key: "grid-study", quantity_key: "kappa", model_key: "lrr" }).orderBy("version");
+    expect(rows.filter((r) => r.superseded_at === null)).toHaveLength(1);
+    expect(rows.at(-1).lower).toBe(0.38);
+    const audit = await testDb()("audit_log").where({ entity: "band", entity_id: second.body.data!.reviseBand.id }).first();
+    expect(audit.action).toBe("band.revised");
+    expect(audit.details.reason).toBe("tightened after the closure review");
+    expect(audit.details.before.lower).toBe(0.37);
+  });
+
+  it("names the field of a bad revision: limits in the wrong order, no reason", async () => {
+    const res = await postGraphQL({
+      query: "mutation($input: BandRevisionInput!) { reviseBand(input: $input) { id } }",
+      variables: { input: { ...bandInput("short"), lower: 0.5, upper: 0.4 } },
+      cookie: cookies.qa!,
+    });
+    const paths = res.body.errors?.[0]?.extensions?.issues?.map((i) => i.path);
+    expect(paths).toEqual(expect.arrayContaining(["input.upper", "input.reason"]));
+  });
+});
