@@ -43,11 +43,19 @@ export function DeviationCell({ deviation, deviationPct }: { deviation: number |
   );
 }
 
+// drift_reason is "baseline" (a step against the last approved build larger than the
+// noise floor) or "trend" (Mann–Kendall monotone trend over the recent builds).
+const DRIFT_TEXT: Record<string, { mark: string; text: string; title: string }> = {
+  baseline: { mark: "Δ", text: "step", title: "Changed against the baseline by more than the quantity's noise floor" },
+  trend: { mark: "↗", text: "trend", title: "Monotone trend over the recent builds (Mann–Kendall test)" },
+};
+
 export function DriftCell({ drift, reason }: { drift: boolean; reason: string | null }) {
   if (!drift) return <span className="text-ink-faint">—</span>;
+  const d = DRIFT_TEXT[reason ?? ""] ?? { mark: "↗", text: "drift", title: "Drift against the baseline or trend" };
   return (
-    <span title={reason ?? "Drift against the baseline or trend"} className="inline-flex items-center gap-1 rounded bg-verdict-marginal/15 px-1.5 py-0.5 text-xs text-verdict-marginal ring-1 ring-inset ring-verdict-marginal/40">
-      <span aria-hidden>↗</span> drift
+    <span title={d.title} className="inline-flex items-center gap-1 whitespace-nowrap rounded bg-verdict-marginal/15 px-1.5 py-0.5 text-xs text-verdict-marginal ring-1 ring-inset ring-verdict-marginal/40">
+      <span aria-hidden>{d.mark}</span> drift: {d.text}
     </span>
   );
 }
