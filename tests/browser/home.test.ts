@@ -1,8 +1,8 @@
 // Browser smoke test: the home page, rendered by the real server on the seeded
-// demo history and loaded in Debian's Chromium, lists the latest builds.
+// demo history and loaded in Debian's Chromium after signing in, lists the latest builds.
 import { mkdir } from "node:fs/promises";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { openBrowserSession, type BrowserSession } from "@/tests/helpers/browser";
+import { openBrowserSession, signInThroughForm, type BrowserSession } from "@/tests/helpers/browser";
 import { requireEnv } from "@/tests/helpers/env";
 
 const baseUrl = requireEnv("TAULINE_TEST_URL");
@@ -10,6 +10,7 @@ let session: BrowserSession;
 
 beforeAll(async () => {
   session = await openBrowserSession();
+  await signInThroughForm(session.page, baseUrl, "developer@fenwick-hydro.test", requireEnv("TAULINE_DEMO_PASSWORD"));
 });
 
 afterAll(async () => {

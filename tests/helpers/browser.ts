@@ -52,3 +52,12 @@ export async function openBrowserSession(): Promise<BrowserSession> {
     },
   };
 }
+
+/** Signs in through the real sign-in form, as a person would, and waits to leave it. */
+export async function signInThroughForm(page: Page, baseUrl: string, email: string, password: string): Promise<void> {
+  await page.goto(`${baseUrl}/sign-in`, { waitUntil: "domcontentloaded" });
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill(password);
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await page.waitForURL((url) => !url.pathname.startsWith("/sign-in"), { timeout: 60_000 });
+}
