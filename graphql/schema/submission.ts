@@ -72,7 +72,17 @@ export const submissionTypeDefs = /* GraphQL */ `
     created: Boolean!
   }
 
+  "A file of a GraphQL multipart request (https://github.com/jaydenseric/graphql-multipart-request-spec)."
+  scalar File
+
   extend type Mutation {
-    submitResults(input: ResultSubmission!): SubmissionReceipt!
+    """
+    Stores a build's runs, derives and judges their quantities. Three ways to call it:
+    input alone (the CI contract); file alone, a JSON results file (a ResultSubmission or a
+    whole request body {query, variables: {input}}); or file as a two-column CSV with a header
+    row, plus input (build and exactly one run) and seriesKey (u_plus, k_decay, cf, residual):
+    the CSV becomes that run's series. A multipart request needs the header x-tauline-request.
+    """
+    submitResults(input: ResultSubmission, file: File, seriesKey: String): SubmissionReceipt!
   }
 `;
