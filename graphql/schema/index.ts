@@ -1,17 +1,24 @@
 import { createSchema } from "graphql-yoga";
 import type { GraphQLContext } from "../context";
 import { bandMutations } from "../resolvers/bands";
+import { caseLibraryResolvers } from "../resolvers/case-library";
 import { Mutation } from "../resolvers/mutations";
+import { overviewResolvers } from "../resolvers/overview";
 import { Query } from "../resolvers/queries";
 import { DateTime, JSONScalar } from "../resolvers/scalars";
+import { trendsResolvers } from "../resolvers/trends";
 import * as types from "../resolvers/types";
 import { bandsTypeDefs } from "./bands";
 import { baseTypeDefs } from "./base";
 import { buildsTypeDefs } from "./builds";
+import { caseLibraryTypeDefs } from "./case-library";
 import { libraryTypeDefs } from "./library";
+import { overviewTypeDefs } from "./overview";
 import { submissionTypeDefs } from "./submission";
+import { trendsTypeDefs } from "./trends";
 
 export const schema = createSchema<GraphQLContext>({
-  typeDefs: [baseTypeDefs, submissionTypeDefs, buildsTypeDefs, libraryTypeDefs, bandsTypeDefs],
-  resolvers: { DateTime, JSON: JSONScalar, Query, Mutation: { ...Mutation, ...bandMutations }, ...types },
+  typeDefs: [baseTypeDefs, submissionTypeDefs, buildsTypeDefs, libraryTypeDefs, bandsTypeDefs, overviewTypeDefs, trendsTypeDefs, caseLibraryTypeDefs],
+  // Resolver maps merge field by field (graphql-tools), so screen modules add Query fields and types.
+  resolvers: [{ DateTime, JSON: JSONScalar, Query, Mutation: { ...Mutation, ...bandMutations }, ...types }, overviewResolvers, trendsResolvers, caseLibraryResolvers],
 });

@@ -1,43 +1,107 @@
 import "server-only";
+import { z } from "zod";
 import { getDb } from "@/db";
-import { listBuilds } from "@/db/queries/builds";
-import { getLatestDecisionsByBuildIds } from "@/db/queries/gate";
+import { getBuildsByIds, type BuildRow } from "@/db/queries/builds";
+import { getBandExits, getNewestBuildsPerBranch, getOpenDrifts } from "@/db/queries/overview";
+import { countSettledUndecidedCandidates, getAwaitingReleaseCandidates } from "@/db/queries/release-candidates";
+import type { Actor } from "./actor";
+import { requirePerson } from "./authorize";
+import { parseInput } from "./overview-input";
 
-export interface BuildSummary {
-  id: number;
-  solver: string;
-  version: string;
-  commit: string;
+// The morning view: what a developer or release manager reads first. Each widget
+// has its own service so that the page can load them independently.
+
+export const morningViewSchema = z.object({
+  branches: z.number().int().min(1).max(50).default(8),
+});
+export const branchActivitySchema = z.object({ perBranch: z.number().int().min(1).max(20).default(5) });
+export const candidatesSchema = z.object({ first: z.number().int().min(1).max(100).default(20) });
+
+export interface BranchActivity {
   branch: string;
-  receivedAt: Date;
-  verdict: "within" | "marginal" | "outside" | "unbanded" | "missing";
-  gate: "pending" | "approved" | "held" | "rejected";
-  runCounts: Record<"within" | "marginal" | "outside" | "unbanded" | "missing", number>;
+  builds: BuildRow[];
+  baseline: BuildRow | null;
 }
 
-/** The newest builds with run counts per verdict and gate state (home page). */
-export async function getLatestBuilds({ limit = 30 }: { limit?: number } = {}): Promise<BuildSummary[]> {
+/** The newest builds of each active branch, and the baseline the head is judged against. */
+export async function findBranchActivity({ actor, branches, unsafeInput }: { actor: Actor | null; branches: number; unsafeInput: unknown }): Promise<BranchActivity[]> {
+  requirePerson(actor);
+  const { perBranch } = parseInput(branchActivitySchema, unsafeInput);
   const db = getDb();
-  const { rows } = await listBuilds({ db, filter: { limit, offset: 0 } });
-  const ids = rows.map((r) => r.id);
-  const [decisions, counts] = await Promise.all([
-    getLatestDecisionsByBuildIds({ db, buildIds: ids }),
-    db("runs").whereIn("build_id", ids).groupBy("build_id", "verdict").select("build_id", "verdict").count<{ build_id: number; verdict: BuildSummary["verdict"]; count: number }[]>({ count: "*" }),
-  ]);
-  const gate = new Map(decisions.map((d) => [d.build_id, d.state]));
-  return rows.map((r) => {
-    const runCounts = { within: 0, marginal: 0, outside: 0, unbanded: 0, missing: 0 };
-    for (const c of counts) if (c.build_id === r.id) runCounts[c.verdict] = Number(c.count);
-    return {
-      id: r.id,
-      solver: r.solver,
-      version: r.version,
-      commit: r.commit,
-      branch: r.branch,
-      receivedAt: r.received_at,
-      verdict: r.verdict,
-      gate: gate.get(r.id) ?? "pending",
-      runCounts,
-    };
-  });
+  const rows = await getNewestBuildsPerBranch({ db, branches, perBranch });
+  const baselineIds = [...new Set(rows.map((r) => r.baseline_id).filter((id): id is number => id !== null))];
+  const baselines = new Map((await getBuildsByIds({ db, ids: baselineIds })).map((b) => [b.id, b]));
+  const out: BranchActivity[] = [];
+  for (const { head_received_at: _, baseline_id, ...build } of rows) {
+    let entry = out.find((e) => e.branch === build.branch);
+    if (!entry) {
+      entry = { branch: build.branch, builds: [], baseline: baseline_id === null ? null : baselines.get(baseline_id) ?? null };
+      out.push(entry);
+    }
+    entry.builds.push(build);
+  }
+  return out;
+}
+
+/** Quantities of each branch head that left their band since the branch baseline. */
+export async function findBandExits({ actor, branches }: { actor: Actor | null; branches: number }) {
+  requirePerson(actor);
+  const rows = await getBandExits({ db: getDb(), branches });
+  return rows.map((r) => ({
+    branch: r.branch,
+    buildId: r.head_id,
+    baselineBuildId: r.baseline_id,
+    runId: r.run_id,
+    runStatus: r.run_status,
+    case: r.case_key,
+    model: r.model_key,
+    grid: r.grid,
+    quantity: r.quantity_key,
+    value: r.value,
+    verdict: r.verdict,
+    baselineValue: r.baseline_value,
+    baselineVerdict: r.baseline_verdict,
+    reference: r.reference,
+    lower: r.lower,
+    upper: r.upper,
+    bandVersion: r.band_version,
+  }));
+}
+
+/** Quantities of each branch head flagged as drifting (baseline change or monotone trend). */
+export async function findOpenDrifts({ actor, branches }: { actor: Actor | null; branches: number }) {
+  requirePerson(actor);
+  const rows = await getOpenDrifts({ db: getDb(), branches });
+  return rows.map((r) => ({
+    branch: r.branch,
+    buildId: r.head_id,
+    runId: r.run_id,
+    case: r.case_key,
+    model: r.model_key,
+    grid: r.grid,
+    quantity: r.quantity_key,
+    value: r.value,
+    verdict: r.verdict,
+    reason: r.drift_reason,
+    pValue: r.drift_p_value,
+    slopePerBuild: r.drift_slope,
+    baselineValue: r.baseline_value,
+    baselineDelta: r.baseline_delta,
+    noiseFloor: r.noise_floor,
+  }));
+}
+
+/** Release candidates awaiting a decision, newest first, and how many older ones a later decision settled. */
+export async function findAwaitingCandidates({ actor, unsafeInput }: { actor: Actor | null; unsafeInput: unknown }) {
+  requirePerson(actor);
+  const { first } = parseInput(candidatesSchema, unsafeInput);
+  const db = getDb();
+  const [awaiting, settledUndecided] = await Promise.all([getAwaitingReleaseCandidates({ db, limit: first }), countSettledUndecidedCandidates({ db })]);
+  return { awaiting, settledUndecided };
+}
+
+/** Validates the morning view's own arguments (how many branches to show). */
+export function parseMorningView({ actor, unsafeInput }: { actor: Actor | null; unsafeInput: unknown }) {
+  requirePerson(actor);
+  return parseInput(morningViewSchema, unsafeInput);
 }
