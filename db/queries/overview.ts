@@ -9,7 +9,7 @@ import type { Verdict } from "@/lib/analysis";
 
 const LATEST_STATE = `(select d.state from gate_decisions d where d.build_id = b.id order by d.decided_at desc, d.id desc limit 1)`;
 
-/** SQL of the heads CTE: id, branch, received_at, baseline_id of up to :branches branches. */
+/** SQL of the heads CTE: id, branch, received_at, baseline_id and display rank of up to :branches branches. */
 const HEADS_CTE = `
   with latest as (
     select distinct on (branch) id, branch, received_at
@@ -18,8 +18,11 @@ const HEADS_CTE = `
     select l.id, l.branch, l.received_at,
       (select b.id from builds b
         where b.branch = l.branch and b.id <> l.id and b.received_at <= l.received_at and ${LATEST_STATE} = 'approved'
-        order by b.received_at desc, b.id desc limit 1) as baseline_id
-    from latest l order by l.received_at desc limit :branches
+        order by b.received_at desc, b.id desc limit 1) as baseline_id,
+      -- main and the release lines first, then other branches by their newest activity
+      row_number() over (order by (l.branch = 'main') desc, (l.branch like 'release/%') desc, l.received_at desc, l.branch) as rank
+    from latest l
+    order by rank limit :branches
   )`;
 
 export interface BranchBuildRow extends BuildRow {
@@ -36,7 +39,7 @@ export async function getNewestBuildsPerBranch({ db, branches, perBranch }: { db
     cross join lateral (
       select * from builds x where x.branch = h.branch order by x.received_at desc, x.id desc limit :perBranch
     ) b
-    order by h.received_at desc, h.branch, b.received_at desc, b.id desc`,
+    order by h.rank, b.received_at desc, b.id desc`,
     { branches, perBranch },
   );
   return result.rows;
@@ -83,7 +86,7 @@ export async function getBandExits({ db, branches }: { db: Db; branches: number 
     left join runs nr on nr.build_id = h.id and nr.case_key = bq.case_key and nr.model_key = bq.model_key and nr.grid = bq.grid
     left join bands d on d.id = coalesce(nq.band_id, bq.band_id)
     where nq.id is null or nq.verdict in ('outside', 'missing')
-    order by h.received_at desc, bq.case_key, bq.model_key, bq.grid, bq.quantity_key`,
+    order by h.rank, bq.case_key, bq.model_key, bq.grid, bq.quantity_key`,
     { branches },
   );
   return result.rows;
@@ -116,7 +119,7 @@ export async function getOpenDrifts({ db, branches }: { db: Db; branches: number
     from heads h
     join quantity_values q on q.build_id = h.id and q.drift
     left join bands d on d.id = q.band_id
-    order by h.received_at desc, q.case_key, q.model_key, q.grid, q.quantity_key`,
+    order by h.rank, q.case_key, q.model_key, q.grid, q.quantity_key`,
     { branches },
   );
   return result.rows;

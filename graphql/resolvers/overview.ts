@@ -3,6 +3,7 @@ import type { GraphQLContext } from "../context";
 
 type Ctx = GraphQLContext;
 interface MorningViewArgs {
+  id: string;
   branches: number;
 }
 interface QuantityRef {
@@ -17,7 +18,10 @@ const unitOf = async (q: QuantityRef, _: unknown, ctx: Ctx) => (await definition
 
 export const overviewResolvers = {
   Query: {
-    morningView: (_: unknown, args: Record<string, unknown>, ctx: Ctx): MorningViewArgs => parseMorningView({ actor: ctx.actor, unsafeInput: args }),
+    morningView(_: unknown, args: Record<string, unknown>, ctx: Ctx): MorningViewArgs {
+      const { branches } = parseMorningView({ actor: ctx.actor, unsafeInput: args });
+      return { id: `morning-view:${branches}`, branches };
+    },
   },
   MorningView: {
     branches: (v: MorningViewArgs, args: Record<string, unknown>, ctx: Ctx) => findBranchActivity({ actor: ctx.actor, branches: v.branches, unsafeInput: args }),

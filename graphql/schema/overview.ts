@@ -64,6 +64,8 @@ export const overviewTypeDefs = /* GraphQL */ `
   }
 
   type MorningView {
+    "Stable per argument set, so that the browser cache merges the widgets' separate queries."
+    id: ID!
     branches(perBranch: Int = 5): [BranchActivity!]!
     bandExits: [BandExit!]!
     openDrifts: [OpenDrift!]!
