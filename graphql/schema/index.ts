@@ -1,6 +1,7 @@
 import { createSchema } from "graphql-yoga";
 import type { GraphQLContext } from "../context";
 import { bandMutations } from "../resolvers/bands";
+import { buildsViewResolvers } from "../resolvers/builds-view";
 import { caseLibraryResolvers } from "../resolvers/case-library";
 import { Mutation } from "../resolvers/mutations";
 import { overviewResolvers } from "../resolvers/overview";
@@ -11,6 +12,7 @@ import * as types from "../resolvers/types";
 import { bandsTypeDefs } from "./bands";
 import { baseTypeDefs } from "./base";
 import { buildsTypeDefs } from "./builds";
+import { buildsViewTypeDefs } from "./builds-view";
 import { caseLibraryTypeDefs } from "./case-library";
 import { libraryTypeDefs } from "./library";
 import { overviewTypeDefs } from "./overview";
@@ -18,7 +20,7 @@ import { submissionTypeDefs } from "./submission";
 import { trendsTypeDefs } from "./trends";
 
 export const schema = createSchema<GraphQLContext>({
-  typeDefs: [baseTypeDefs, submissionTypeDefs, buildsTypeDefs, libraryTypeDefs, bandsTypeDefs, overviewTypeDefs, trendsTypeDefs, caseLibraryTypeDefs],
+  typeDefs: [baseTypeDefs, submissionTypeDefs, buildsTypeDefs, libraryTypeDefs, bandsTypeDefs, buildsViewTypeDefs, overviewTypeDefs, trendsTypeDefs, caseLibraryTypeDefs],
   // Resolver maps merge field by field (graphql-tools), so screen modules add Query fields and types.
-  resolvers: [{ DateTime, JSON: JSONScalar, Query, Mutation: { ...Mutation, ...bandMutations }, ...types }, overviewResolvers, trendsResolvers, caseLibraryResolvers],
+  resolvers: [{ DateTime, JSON: JSONScalar, Query, Mutation: { ...Mutation, ...bandMutations }, ...types }, overviewResolvers, trendsResolvers, caseLibraryResolvers, buildsViewResolvers],
 });
