@@ -1,5 +1,6 @@
 import { VerdictBadge } from "@/components/ui/verdict-badge";
 import { formatDelta, formatSig } from "@/lib/format/numbers";
+import { formatValue } from "./format-value";
 import { DeviationCell, DriftCell, OriginTag, displayUnit, formatLimits } from "./quantity-cells";
 import type { QuantityRow } from "./types";
 
@@ -39,7 +40,7 @@ export function QuantityTable({ quantities, sortByVerdict = false }: { quantitie
                 <div>{q.label ?? q.key}</div>
                 <div className="font-mono text-[11px] text-ink-faint">{q.key}</div>
               </td>
-              <td className="py-1.5 pr-3 text-right font-mono tabular-nums">{formatSig(q.value)}</td>
+              <td className="py-1.5 pr-3 text-right font-mono tabular-nums">{formatValue(q.value)}</td>
               <td className="py-1.5 pr-3 text-xs text-ink-soft dark:text-white/60">{displayUnit(q.unit)}</td>
               <td className="py-1.5 pr-3">
                 <OriginTag origin={q.origin} />
