@@ -10,7 +10,7 @@ import { formatDelta, formatSig, withUnit } from "@/lib/format/numbers";
 import { BuildName, RunQuantity } from "./build-bits";
 import { runHref, trendHref } from "./links";
 import { groupByBranch } from "./group-by-branch";
-import { formatKeep, formatLimits, relativeChange } from "./quantity-text";
+import { formatLimits, relativeChange } from "./quantity-text";
 
 export function BandExits() {
   const { data, loading, error } = useQuery(MORNING_BAND_EXITS);
@@ -79,7 +79,7 @@ function ExitRow({ row: r }: { row: BandExitRow }) {
       <td className="py-1.5 pr-3 whitespace-nowrap font-mono text-xs tabular-nums">
         {formatLimits(r.lower, r.upper, r.unit)}
         {r.bandVersion !== null && <span className="ml-1 font-sans text-ink-faint" title={`band version ${r.bandVersion}`}>v{r.bandVersion}</span>}
-        {r.reference !== null && <span className="block font-sans text-ink-faint">reference {withUnit(formatKeep(r.reference), r.unit)}</span>}
+        {r.reference !== null && <span className="block font-sans text-ink-faint">reference {withUnit(formatSig(r.reference, 4), r.unit)}</span>}
       </td>
       <td className="py-1.5 pr-3 text-right whitespace-nowrap">
         <span className="font-mono tabular-nums">{withUnit(formatSig(r.baselineValue, 4), r.unit)}</span> <span className="text-xs text-ink-faint">{r.baselineVerdict}</span>

@@ -4,9 +4,9 @@ import { formatSig, withUnit } from "@/lib/format/numbers";
 
 /** "1.076 – 1.098", "≥ 0.99" or "≤ 2" for a one-sided band; "no band" when neither limit exists. */
 export function formatLimits(lower: number | null, upper: number | null, unit: string | null): string {
-  if (lower !== null && upper !== null) return withUnit(`${formatKeep(lower)} – ${formatKeep(upper)}`, unit);
-  if (lower !== null) return withUnit(`≥ ${formatKeep(lower)}`, unit);
-  if (upper !== null) return withUnit(`≤ ${formatKeep(upper)}`, unit);
+  if (lower !== null && upper !== null) return withUnit(`${formatSig(lower, 4)} – ${formatSig(upper, 4)}`, unit);
+  if (lower !== null) return withUnit(`≥ ${formatSig(lower, 4)}`, unit);
+  if (upper !== null) return withUnit(`≤ ${formatSig(upper, 4)}`, unit);
   return "no band";
 }
 
@@ -17,13 +17,3 @@ export function relativeChange(delta: number | null, baseline: number | null): s
   return `${pct > 0 ? "+" : pct < 0 ? "−" : "±"}${formatSig(Math.abs(pct), 3)} %`;
 }
 
-/**
- * A limit or reference with `digits` significant figures, keeping trailing zeros
- * (1.100, not 1.1: the zeros state the precision of the limit).
- */
-export function formatKeep(value: number | null | undefined, digits = 4): string {
-  if (value === null || value === undefined || !Number.isFinite(value)) return formatSig(value, digits);
-  const abs = Math.abs(value);
-  if (value === 0 || abs < 1e-3 || abs >= 1e6) return formatSig(value, digits);
-  return value.toPrecision(digits).replace(/^-/, "−");
-}

@@ -1,7 +1,6 @@
 import { VerdictBadge } from "@/components/ui/verdict-badge";
 import type { TrendChartData } from "@/graphql/operations/trends";
 import { DRIFT_ALPHA, DRIFT_WINDOW } from "@/lib/evaluation/judge";
-import { formatKeep } from "@/components/overview/quantity-text";
 import { formatDelta, formatSig, withUnit } from "@/lib/format/numbers";
 
 // The drift test of each model's newest point, as stored when that build was judged.
@@ -48,7 +47,7 @@ export function TrendSummary({ chart, colourOf }: { chart: TrendChartData; colou
                         "no band"
                       ) : (
                         <>
-                          {p.lower === null ? "−∞" : formatKeep(p.lower)} … {p.upper === null ? "+∞" : formatKeep(p.upper)}
+                          {p.lower === null ? "−∞" : formatSig(p.lower, 4)} … {p.upper === null ? "+∞" : formatSig(p.upper, 4)}
                           <span className="font-sans text-ink-faint">
                             {" "}
                             {p.bandKind} v{p.bandVersion}, noise floor {formatSig(p.noiseFloor, 2)}

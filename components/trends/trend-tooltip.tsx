@@ -1,5 +1,4 @@
 import type { PointTooltipProps } from "@nivo/line";
-import { formatKeep } from "@/components/overview/quantity-text";
 import { formatDelta, formatSig, withUnit } from "@/lib/format/numbers";
 import type { TrendSeries } from "./trend-layers";
 
@@ -27,8 +26,8 @@ export function trendTooltip(unit: string | null) {
         {p.bandId !== null && (
           <p>
             {p.bandKind} band v{p.bandVersion}
-            {p.bandModel === null ? " (all models)" : ""}: {p.lower === null ? "−∞" : formatKeep(p.lower)} … {p.upper === null ? "+∞" : formatKeep(p.upper)}
-            {p.reference !== null && <>, reference {formatKeep(p.reference)}</>}
+            {p.bandModel === null ? " (all models)" : ""}: {p.lower === null ? "−∞" : formatSig(p.lower, 4)} … {p.upper === null ? "+∞" : formatSig(p.upper, 4)}
+            {p.reference !== null && <>, reference {formatSig(p.reference, 4)}</>}
           </p>
         )}
         {p.baselineDelta !== null && <p>change vs baseline {formatDelta(p.baselineDelta, 3)}</p>}
