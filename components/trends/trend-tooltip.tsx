@@ -10,12 +10,12 @@ export function trendTooltip(unit: string | null) {
     const { build, point: p, model } = point.data;
     const u = (v: number | null) => withUnit(formatSig(v, 4), unit);
     return (
-      <div className="max-w-xs rounded border border-ink/15 bg-white px-3 py-2 text-xs text-ink shadow-md">
+      <div className="w-72 rounded border border-ink/15 bg-white px-3 py-2 text-xs text-ink shadow-md">
         <p className="font-semibold">
           {build.version} <span className="font-mono font-normal text-ink-faint">{build.commit.slice(0, 10)}</span>
         </p>
         <p className="text-ink-faint">
-          {when.format(new Date(build.receivedAt))} UTC · gate {build.gate === "pending" ? "no decision" : build.gate}
+          {when.format(new Date(build.receivedAt))} UTC · gate: {build.gate === "pending" ? "no decision" : build.gate}
         </p>
         <p className="mt-1">
           <span className="font-medium" style={{ color: point.seriesColor }}>
