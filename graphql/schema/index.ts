@@ -6,6 +6,7 @@ import { caseLibraryResolvers } from "../resolvers/case-library";
 import { Mutation } from "../resolvers/mutations";
 import { overviewResolvers } from "../resolvers/overview";
 import { Query } from "../resolvers/queries";
+import { QuantityBandView, RunView } from "../resolvers/run-view";
 import { DateTime, JSONScalar } from "../resolvers/scalars";
 import { trendsResolvers } from "../resolvers/trends";
 import * as types from "../resolvers/types";
@@ -16,11 +17,12 @@ import { buildsViewTypeDefs } from "./builds-view";
 import { caseLibraryTypeDefs } from "./case-library";
 import { libraryTypeDefs } from "./library";
 import { overviewTypeDefs } from "./overview";
+import { runViewTypeDefs } from "./run-view";
 import { submissionTypeDefs } from "./submission";
 import { trendsTypeDefs } from "./trends";
 
 export const schema = createSchema<GraphQLContext>({
-  typeDefs: [baseTypeDefs, submissionTypeDefs, buildsTypeDefs, libraryTypeDefs, bandsTypeDefs, buildsViewTypeDefs, overviewTypeDefs, trendsTypeDefs, caseLibraryTypeDefs],
+  typeDefs: [baseTypeDefs, submissionTypeDefs, buildsTypeDefs, libraryTypeDefs, bandsTypeDefs, buildsViewTypeDefs, overviewTypeDefs, trendsTypeDefs, caseLibraryTypeDefs, runViewTypeDefs],
   // Resolver maps merge field by field (graphql-tools), so screen modules add Query fields and types.
-  resolvers: [{ DateTime, JSON: JSONScalar, Query, Mutation: { ...Mutation, ...bandMutations }, ...types }, overviewResolvers, trendsResolvers, caseLibraryResolvers, buildsViewResolvers],
+  resolvers: [{ DateTime, JSON: JSONScalar, Query, Mutation: { ...Mutation, ...bandMutations }, ...types }, overviewResolvers, trendsResolvers, caseLibraryResolvers, buildsViewResolvers, { Run: RunView, QuantityValue: QuantityBandView }],
 });
