@@ -1,8 +1,8 @@
 import Link from "next/link";
-import { formatDelta, formatPct, formatSig } from "@/lib/format/numbers";
+import { formatSig } from "@/lib/format/numbers";
 import type { ComparedRunRow } from "@/graphql/operations/builds";
 import { displayUnit } from "@/components/quantities/quantity-cells";
-import { formatValue } from "@/components/quantities/format-value";
+import { formatDifference, formatDifferencePct, formatValue } from "@/components/quantities/format-value";
 import { verdictDirection } from "./compare-summary";
 import { VerdictChange } from "./verdict-change";
 
@@ -92,8 +92,8 @@ export function CompareTable({ runs, buildId, otherBuildId, thisLabel, otherLabe
                   <td className="px-2 py-1 text-xs text-ink-soft dark:text-white/60">{displayUnit(q.unit)}</td>
                   <td className="px-2 py-1 text-right font-mono tabular-nums">{formatValue(q.otherValue, 5)}</td>
                   <td className="px-2 py-1 text-right font-mono tabular-nums">{formatValue(q.value, 5)}</td>
-                  <td className="px-2 py-1 text-right font-mono text-xs tabular-nums">{formatDelta(q.difference)}</td>
-                  <td className="px-2 py-1 text-right font-mono text-xs tabular-nums">{formatPct(q.differencePct)}</td>
+                  <td className="px-2 py-1 text-right font-mono text-xs tabular-nums">{formatDifference(q.difference, q.otherValue)}</td>
+                  <td className="px-2 py-1 text-right font-mono text-xs tabular-nums">{formatDifferencePct(q.differencePct)}</td>
                   <td className="px-2 py-1">
                     <VerdictChange from={q.otherVerdict} to={q.verdict} />
                   </td>

@@ -28,7 +28,9 @@ export function layoutMatrix({
   cases: { key: string; title: string; models: string[] }[];
   models: { key: string; name: string; family: string }[];
 }): MatrixLayout {
-  const usedCases = cases.filter((c) => runs.some((r) => r.case === c.key));
+  // Every canonical case gets a row: a case CI left out entirely must show as empty
+  // cells, not vanish from the matrix.
+  const usedCases = cases;
   const modelKeys = new Set([...runs.map((r) => r.model), ...usedCases.flatMap((c) => c.models)]);
   const rank = (family: string) => (FAMILY_ORDER.indexOf(family) + FAMILY_ORDER.length + 1) % (FAMILY_ORDER.length + 1);
   const columns = models.filter((m) => modelKeys.has(m.key)).sort((a, b) => rank(a.family) - rank(b.family));

@@ -1,4 +1,5 @@
-import { formatDelta, formatPct, formatSig } from "@/lib/format/numbers";
+import { formatSig } from "@/lib/format/numbers";
+import { formatDifference, formatDifferencePct } from "./format-value";
 import type { QuantityOrigin } from "./types";
 
 // Units that are "dimensionless" carry no text; long units get a short form so the
@@ -33,12 +34,12 @@ export function OriginTag({ origin }: { origin: QuantityOrigin }) {
   );
 }
 
-export function DeviationCell({ deviation, deviationPct }: { deviation: number | null; deviationPct: number | null }) {
+export function DeviationCell({ deviation, deviationPct, reference }: { deviation: number | null; deviationPct: number | null; reference: number | null }) {
   if (deviation === null) return <span className="text-ink-faint">—</span>;
   return (
-    <span className="whitespace-nowrap">
-      {formatDelta(deviation)}
-      {deviationPct !== null && <span className="ml-1 text-xs text-ink-faint">({formatPct(deviationPct)})</span>}
+    <span className="whitespace-nowrap" title={`value − reference = ${deviation}`}>
+      {formatDifference(deviation, reference)}
+      {deviationPct !== null && <span className="ml-1 text-xs text-ink-faint">({formatDifferencePct(deviationPct)})</span>}
     </span>
   );
 }
@@ -46,7 +47,7 @@ export function DeviationCell({ deviation, deviationPct }: { deviation: number |
 // drift_reason is "baseline" (a step against the last approved build larger than the
 // noise floor) or "trend" (Mann–Kendall monotone trend over the recent builds).
 const DRIFT_TEXT: Record<string, { mark: string; text: string; title: string }> = {
-  baseline: { mark: "Δ", text: "step", title: "Changed against the baseline by more than the quantity's noise floor" },
+  baseline: { mark: "Δ", text: "vs baseline", title: "Moved away from the baseline value by more than the quantity's noise floor" },
   trend: { mark: "↗", text: "trend", title: "Monotone trend over the recent builds (Mann–Kendall test)" },
 };
 
@@ -55,7 +56,7 @@ export function DriftCell({ drift, reason }: { drift: boolean; reason: string | 
   const d = DRIFT_TEXT[reason ?? ""] ?? { mark: "↗", text: "drift", title: "Drift against the baseline or trend" };
   return (
     <span title={d.title} className="inline-flex items-center gap-1 whitespace-nowrap rounded bg-verdict-marginal/15 px-1.5 py-0.5 text-xs text-verdict-marginal ring-1 ring-inset ring-verdict-marginal/40">
-      <span aria-hidden>{d.mark}</span> drift: {d.text}
+      <span aria-hidden>{d.mark}</span> {d.text}
     </span>
   );
 }

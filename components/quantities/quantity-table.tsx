@@ -1,6 +1,6 @@
 import { VerdictBadge } from "@/components/ui/verdict-badge";
-import { formatDelta, formatSig } from "@/lib/format/numbers";
-import { formatValue } from "./format-value";
+import { formatSig } from "@/lib/format/numbers";
+import { formatDifference, formatValue } from "./format-value";
 import { DeviationCell, DriftCell, OriginTag, displayUnit, formatLimits } from "./quantity-cells";
 import type { QuantityRow } from "./types";
 
@@ -19,7 +19,7 @@ export function QuantityTable({ quantities, sortByVerdict = false }: { quantitie
   return (
     <div className="overflow-x-auto">
       <table className="w-full text-sm" data-testid="quantity-table">
-        <thead className="text-left text-xs uppercase tracking-wide text-ink-faint">
+        <thead className="text-left text-xs whitespace-nowrap uppercase tracking-wide text-ink-faint">
           <tr className="border-b border-ink/10 dark:border-white/10">
             <th className="py-1.5 pr-3">Quantity</th>
             <th className="py-1.5 pr-3 text-right">Value</th>
@@ -51,10 +51,10 @@ export function QuantityTable({ quantities, sortByVerdict = false }: { quantitie
               </td>
               <td className="py-1.5 pr-3 text-right font-mono text-xs whitespace-nowrap tabular-nums">{formatLimits(q.lower, q.upper)}</td>
               <td className="py-1.5 pr-3 text-right font-mono text-xs tabular-nums">
-                <DeviationCell deviation={q.deviation} deviationPct={q.deviationPct} />
+                <DeviationCell deviation={q.deviation} deviationPct={q.deviationPct} reference={q.reference} />
               </td>
               <td className="py-1.5 pr-3 text-right font-mono text-xs tabular-nums" title={q.baselineValue !== null ? `baseline value ${formatSig(q.baselineValue)}` : "no baseline value"}>
-                {formatDelta(q.baselineDelta)}
+                {formatDifference(q.baselineDelta, q.baselineValue)}
               </td>
               <td className="py-1.5 pr-3">
                 <DriftCell drift={q.drift} reason={q.driftReason} />

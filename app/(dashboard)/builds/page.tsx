@@ -3,7 +3,7 @@ import { BuildTable } from "@/components/builds/build-table";
 import { PageTitle } from "@/components/ui/panel";
 import { LoadingBlock } from "@/components/ui/states";
 
-export const metadata = { title: "Builds · Tauline" };
+export const metadata = { title: "Builds" };
 
 export default function BuildsPage() {
   return (

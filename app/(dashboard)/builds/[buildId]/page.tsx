@@ -15,7 +15,7 @@ const paramsSchema = z.object({ buildId: z.string().regex(/^[1-9][0-9]{0,15}$/).
 
 export async function generateMetadata({ params }: { params: Promise<{ buildId: string }> }) {
   const { buildId } = await params;
-  return { title: `Build ${buildId} · Tauline` };
+  return { title: `Build ${buildId}` };
 }
 
 /**
