@@ -5,7 +5,7 @@ import { useRouter } from "next/navigation";
 import { useMemo } from "react";
 import type { TrendChartData } from "@/graphql/operations/trends";
 import { formatSig } from "@/lib/format/numbers";
-import { cellEdges, dayTicks, missingPoints, orderTicks, toBandRegions, toPlotSeries, xPositions, yRange, type XMode } from "./trend-data";
+import { cellEdges, dayTicks, missingPoints, niceTicks, orderTicks, tickLabel, toBandRegions, toPlotSeries, xPositions, yRange, type XMode } from "./trend-data";
 import { baselineLayer, bandLayer, DriftLayer, missingLayer, VerdictPointsLayer, type TrendSeries } from "./trend-layers";
 import { SHARED_BAND_COLOUR, TREND_COLOUR_VARS, trendTheme } from "./trend-theme";
 import { trendTooltip } from "./trend-tooltip";
@@ -24,10 +24,18 @@ export function TrendChart({ chart, mode, colourOf }: { chart: TrendChartData; m
     const versions = new Set(regions.map((r) => `${r.model}:${r.version}`));
     const modelsWithBands = new Set(regions.map((r) => r.model));
     const baselineIndex = chart.baseline ? chart.builds.findIndex((b) => b.id === chart.baseline!.id) : -1;
+    const integer = chart.definition?.unit === "samples";
+    const range = yRange(series, regions, { integer });
+    const y = range ? niceTicks(range[0], range[1], 7, { integer }) : { ticks: [], step: 1 };
+    const yLabels = y.ticks.map((t) => tickLabel(t, y.step));
     return {
       xs,
       series,
-      range: yRange(series, regions),
+      range,
+      yTicks: y.ticks,
+      yLabel: new Map(y.ticks.map((t, i) => [t, yLabels[i]])),
+      // Room for the longest tick label (≈ 6.5 px a character at 10.5 px) plus the axis title.
+      left: 34 + 6.5 * Math.max(3, ...yLabels.map((l) => l.length)),
       xDomain: [edges[0], edges[edges.length - 1]] as const,
       tickValues: mode === "order" ? orderTicks(xs, MAX_TICKS) : dayTicks(edges[0], edges[edges.length - 1], 10),
       layers: [
@@ -54,7 +62,7 @@ export function TrendChart({ chart, mode, colourOf }: { chart: TrendChartData; m
       <ResponsiveLine<TrendSeries>
         data={view.series}
         theme={trendTheme}
-        margin={{ top: 24, right: 24, bottom: mode === "order" ? 78 : 48, left: 76 }}
+        margin={{ top: 24, right: 24, bottom: mode === "order" ? 78 : 48, left: view.left }}
         xScale={{ type: "linear", min: view.xDomain[0], max: view.xDomain[1] }}
         yScale={{ type: "linear", min: view.range[0], max: view.range[1] }}
         colors={(s) => colourOf(String(s.id))}
@@ -65,7 +73,8 @@ export function TrendChart({ chart, mode, colourOf }: { chart: TrendChartData; m
         useMesh
         enableCrosshair
         crosshairType="x"
-        axisLeft={{ legend: axisLabel, legendOffset: -64, legendPosition: "middle", tickValues: 7, format: (v) => formatSig(Number(v), 4) }}
+        gridYValues={view.yTicks}
+        axisLeft={{ legend: axisLabel, legendOffset: 14 - view.left, legendPosition: "middle", tickValues: view.yTicks, format: (v) => view.yLabel.get(Number(v)) ?? formatSig(Number(v), 4) }}
         axisBottom={{
           tickValues: view.tickValues,
           tickRotation: mode === "order" ? -38 : 0,

@@ -102,17 +102,52 @@ export function toBandRegions(series: readonly { id: string; data: readonly Plot
   return [...regions.values()];
 }
 
-/** y range covering every value, finite limit and reference, padded by 8 % (or ±1 % of |v| for a constant). */
-export function yRange(series: readonly { data: readonly PlotPoint[] }[], bands: readonly BandRegion[]): [number, number] | null {
+/**
+ * y range covering every value, finite limit and reference, padded by 8 %. A
+ * constant opens by 5 % of its magnitude (±1 at zero); a count (integer) range
+ * opens by half a unit so that zero stays readable above the axis.
+ */
+export function yRange(series: readonly { data: readonly PlotPoint[] }[], bands: readonly BandRegion[], { integer = false } = {}): [number, number] | null {
   const ys: number[] = [];
   for (const s of series) for (const d of s.data) if (d.y !== null && Number.isFinite(d.y)) ys.push(d.y);
   for (const b of bands) for (const v of [b.lower, b.upper, b.reference]) if (v !== null && Number.isFinite(v)) ys.push(v);
   if (ys.length === 0) return null;
   const lo = Math.min(...ys);
   const hi = Math.max(...ys);
+  if (integer) return [Math.floor(lo) - 0.5, Math.max(Math.ceil(hi), Math.floor(lo) + 1) + 0.5];
   const span = hi - lo;
-  const pad = span > 0 ? 0.08 * span : Math.max(Math.abs(lo) * 0.01, 1e-12);
+  const pad = span > 0 ? 0.08 * span : lo !== 0 ? 0.05 * Math.abs(lo) : 1;
   return [lo - pad, hi + pad];
+}
+
+/** Round-number ticks (1, 2 or 5 × 10^k apart) inside [lo, hi], about `count` of them; whole numbers only when `integer`. */
+export function niceTicks(lo: number, hi: number, count: number, { integer = false } = {}): { ticks: number[]; step: number } {
+  const raw = (hi - lo) / Math.max(1, count);
+  const power = 10 ** Math.floor(Math.log10(raw));
+  let step = [1, 2, 5, 10].map((m) => m * power).find((s) => s >= raw) ?? 10 * power;
+  if (integer) step = Math.max(1, Math.round(step));
+  const ticks: number[] = [];
+  // Integer multiples of the step, so round-off does not print 0.30000000000000004.
+  for (let k = Math.ceil(lo / step); k * step <= hi + step * 1e-9; k++) ticks.push(Number((k * step).toPrecision(12)));
+  return { ticks, step };
+}
+
+/** Tick labels with the same number of decimals throughout (0.00265, 0.00270), exponent form outside 1e-3…1e6. */
+export function tickLabel(value: number, step: number): string {
+  if (value === 0) return "0";
+  const abs = Math.abs(value);
+  if (abs < 1e-3 || abs >= 1e6) {
+    const digits = Math.max(1, Math.min(6, Math.floor(Math.log10(abs)) - Math.floor(Math.log10(step)) + 1));
+    const [mantissa, exponent] = value.toExponential(digits - 1).split("e");
+    return `${mantissa}×10${superscript(Number(exponent))}`.replace(/^-/, "−");
+  }
+  const decimals = Math.max(0, -Math.floor(Math.log10(step) + 1e-9));
+  return value.toFixed(decimals).replace(/^-/, "−");
+}
+
+const SUP: Record<string, string> = { "-": "⁻", "0": "⁰", "1": "¹", "2": "²", "3": "³", "4": "⁴", "5": "⁵", "6": "⁶", "7": "⁷", "8": "⁸", "9": "⁹" };
+function superscript(n: number): string {
+  return String(n).split("").map((c) => SUP[c] ?? c).join("");
 }
 
 /** Builds of the axis where a model has a run but no value (missing) — drawn as marks on the axis. */

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { cellEdges, dayTicks, missingPoints, orderTicks, toBandRegions, toPlotSeries, xPositions, yRange } from "@/components/trends/trend-data";
+import { cellEdges, dayTicks, missingPoints, niceTicks, orderTicks, tickLabel, toBandRegions, toPlotSeries, xPositions, yRange } from "@/components/trends/trend-data";
 import type { TrendChartData, TrendPointData } from "@/graphql/operations/trends";
 
 // Shaping of the trend chart: band regions must follow the band version each
@@ -89,12 +89,22 @@ describe("yRange", () => {
     expect(hi).toBeCloseTo(1.149 + 0.08 * span, 12);
   });
 
-  it("opens a constant series by 1 % of its magnitude and returns null without values", () => {
-    const c = chart([{ model: "sa", points: [point(0, { value: 0.0027, bandId: null, lower: null, upper: null, reference: null })] }]);
-    const series = toPlotSeries(c, xPositions(c.builds, "order"));
-    const [lo, hi] = yRange(series, [])!;
-    expect(hi - lo).toBeCloseTo(2 * 0.000027, 15);
+  it("opens a constant series by 5 % of its magnitude, ±1 at zero, and returns null without values", () => {
+    const constant = (value: number) => {
+      const c = chart([{ model: "sa", points: [point(0, { value, bandId: null, lower: null, upper: null, reference: null })] }]);
+      return yRange(toPlotSeries(c, xPositions(c.builds, "order")), [])!;
+    };
+    const [lo, hi] = constant(0.0027);
+    expect(hi - lo).toBeCloseTo(2 * 0.05 * 0.0027, 15);
+    expect(constant(0)).toEqual([-1, 1]);
     expect(yRange([{ data: [] }], [])).toBeNull();
+  });
+
+  it("keeps a count of zero violations half a unit above the bottom, with room for one", () => {
+    const c = chart([{ model: "sst", points: [point(0, { value: 0, lower: null, upper: 0, reference: 0 })] }]);
+    const xs = xPositions(c.builds, "order");
+    const series = toPlotSeries(c, xs);
+    expect(yRange(series, toBandRegions(series, cellEdges(xs)), { integer: true })).toEqual([-0.5, 1.5]);
   });
 });
 
@@ -114,5 +124,19 @@ describe("ticks and missing values", () => {
   it("collects the builds where a model ran but has no value", () => {
     const c = chart([{ model: "k-epsilon", points: [point(0), point(1, { value: null, verdict: "missing" })] }]);
     expect(missingPoints(toPlotSeries(c, xPositions(c.builds, "order"))).map((m) => m.index)).toEqual([1]);
+  });
+});
+
+describe("niceTicks and tickLabel", () => {
+  it("steps c_f ticks by 2×10⁻⁵ and labels them with the same decimals", () => {
+    const { ticks, step } = niceTicks(0.002625, 0.002758, 7);
+    expect(step).toBeCloseTo(2e-5, 18);
+    expect(ticks.map((t) => tickLabel(t, step))).toEqual(["0.00264", "0.00266", "0.00268", "0.00270", "0.00272", "0.00274"]);
+  });
+
+  it("gives whole-number ticks for counts and writes tiny values in exponent form", () => {
+    expect(niceTicks(-0.5, 1.5, 7, { integer: true }).ticks).toEqual([0, 1]);
+    expect(tickLabel(-2.5e-6, 5e-7)).toBe("−2.5×10⁻⁶");
+    expect(tickLabel(0, 0.1)).toBe("0");
   });
 });
