@@ -16,8 +16,8 @@ export default function MorningViewPage() {
         title="Morning view"
         lead="What changed on each branch since its baseline, what is drifting, and which release candidates wait for a decision."
       />
-      <div className="grid gap-5 lg:grid-cols-3">
-        <div className="lg:col-span-2">
+      <div className="grid gap-5 xl:grid-cols-3">
+        <div className="xl:col-span-2">
           <BandExits />
         </div>
         <AwaitingDecision />
