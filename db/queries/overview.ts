@@ -26,7 +26,7 @@ const HEADS_CTE = `
   )`;
 
 export interface BranchBuildRow extends BuildRow {
-  head_received_at: Date;
+  /** The baseline of the branch's newest build (same on every row of the branch). */
   baseline_id: number | null;
 }
 
@@ -34,7 +34,7 @@ export interface BranchBuildRow extends BuildRow {
 export async function getNewestBuildsPerBranch({ db, branches, perBranch }: { db: Db; branches: number; perBranch: number }): Promise<BranchBuildRow[]> {
   const result = await db.raw(
     `${HEADS_CTE}
-    select b.*, h.received_at as head_received_at, h.baseline_id
+    select b.*, h.baseline_id
     from heads h
     cross join lateral (
       select * from builds x where x.branch = h.branch order by x.received_at desc, x.id desc limit :perBranch

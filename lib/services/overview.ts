@@ -32,7 +32,7 @@ export async function findBranchActivity({ actor, branches, unsafeInput }: { act
   const baselineIds = [...new Set(rows.map((r) => r.baseline_id).filter((id): id is number => id !== null))];
   const baselines = new Map((await getBuildsByIds({ db, ids: baselineIds })).map((b) => [b.id, b]));
   const out: BranchActivity[] = [];
-  for (const { head_received_at: _, baseline_id, ...build } of rows) {
+  for (const { baseline_id, ...build } of rows) {
     let entry = out.find((e) => e.branch === build.branch);
     if (!entry) {
       entry = { branch: build.branch, builds: [], baseline: baseline_id === null ? null : baselines.get(baseline_id) ?? null };
