@@ -1,6 +1,7 @@
 "use client";
 
 import { useQuery } from "@apollo/client/react";
+import Link from "next/link";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useCallback, useEffect, useMemo } from "react";
 import { Panel } from "@/components/ui/panel";
@@ -69,6 +70,11 @@ function TrendView({ selection, colourOf }: { selection: TrendSelection; colourO
     <Panel
       title={title}
       subtitle={chart?.definition ? chart.definition.meaning : undefined}
+      actions={
+        <Link className="text-xs text-tide-700 underline dark:text-tide-300" href={`/cases/${selection.caseKey}#q-${selection.quantity}`}>
+          bands and their sources
+        </Link>
+      }
     >
       {error ? (
         <ErrorNotice title="Could not load the trend" error={error} />
