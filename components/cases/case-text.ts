@@ -32,7 +32,7 @@ function describeSetting(key: string, raw: unknown, all: Record<string, unknown>
       return { label: "c_f read at the station", value: label };
     }
     case "stepHeight":
-      return { label: "Step height H (the c_f abscissa is divided by it to give x/H)", value: formatSig(Number(raw), 4) };
+      return { label: "Step height H", value: `${formatSig(Number(raw), 4)} (the c_f abscissa ÷ H gives x/H)` };
     case "residualTargetOrders":
       return { label: "Residual drop expected", value: `≥ ${formatSig(Number(raw), 3)} orders of magnitude` };
     default:
