@@ -1,12 +1,20 @@
 import { formatSig } from "@/lib/format/numbers";
+import type { UploadSeriesKey } from "@/lib/validation/upload";
 import type { UploadCheck } from "./check-upload";
 import { IssueList } from "./issue-list";
+import { SeriesPreview } from "./series-preview";
 
 /** What the browser found in the file before sending: the problems, or what will be submitted. */
-export function CheckSummary({ check }: { check: UploadCheck }) {
+export function CheckSummary({ check, seriesKey }: { check: UploadCheck; seriesKey: UploadSeriesKey | null }) {
+  const preview = check.csv && seriesKey ? <SeriesPreview csv={check.csv} seriesKey={seriesKey} /> : null;
   if (check.issues.length > 0) {
     const n = check.issues.length;
-    return <IssueList issues={check.issues} title={`${n === 50 ? "50 or more" : n} problem${n === 1 ? "" : "s"} to fix before sending; nothing has been sent`} />;
+    return (
+      <div className="space-y-3">
+        <IssueList issues={check.issues} title={`${n === 50 ? "50 or more" : n} problem${n === 1 ? "" : "s"} to fix before sending; nothing has been sent`} />
+        {preview}
+      </div>
+    );
   }
   return (
     <div className="space-y-3 text-sm" data-testid="upload-ready">
@@ -52,6 +60,7 @@ export function CheckSummary({ check }: { check: UploadCheck }) {
           ))}
         </tbody>
       </table>
+      {preview}
       {check.runs.length > 20 && <p className="text-xs text-ink-faint">and {check.runs.length - 20} more runs.</p>}
       <p className="text-xs text-ink-faint">The server also checks that each case and model exists in the library, then derives and judges every quantity.</p>
     </div>

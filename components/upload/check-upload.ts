@@ -1,6 +1,6 @@
 import { formatPath, type FieldIssue } from "@/lib/errors";
 import { submissionSchema } from "@/lib/validation/submission";
-import { assembleUpload, locateCsvIssues, type UploadKind, type UploadSeriesKey } from "@/lib/validation/upload";
+import { assembleUpload, detectUploadKind, locateCsvIssues, type UploadKind, type UploadSeriesKey } from "@/lib/validation/upload";
 import type { CsvSeries } from "@/lib/validation/upload-csv";
 
 // The browser's check before anything is sent: the same assembly and the same
@@ -76,4 +76,28 @@ export function checkUpload({
 
 function megabytes(bytes: number): string {
   return `${(bytes / (1024 * 1024)).toFixed(1)} MB`;
+}
+
+export interface CheckArgs {
+  file: File | null;
+  text: string | null;
+  kind: UploadKind;
+  fields: RunFields;
+  seriesKey: UploadSeriesKey | null;
+  maxBytes: number;
+}
+
+/** The check of the file the page holds: size first (unread), then kind, then checkUpload. */
+export function checkChosenFile({ file, text, kind, fields, seriesKey, maxBytes }: CheckArgs): UploadCheck | null {
+  if (!file) return null;
+  const fileInfo = { name: file.name, type: file.type, size: file.size, text: text ?? "" };
+  // Too large: say so without reading it (the server would refuse it anyway).
+  if (file.size > maxBytes) return checkUpload({ file: fileInfo, fields: null, seriesKey: null, maxBytes });
+  if (text === null) return null;
+  const detected = detectUploadKind(fileInfo);
+  if (detected !== kind) {
+    const message = `looks like a ${detected.toUpperCase()} file (by its name or first character), but ${kind.toUpperCase()} is chosen above`;
+    return { kind, issues: [{ path: "file", message }], build: null, runs: [], csv: null };
+  }
+  return checkUpload({ file: fileInfo, fields: kind === "csv" ? fields : null, seriesKey: kind === "csv" ? seriesKey : null, maxBytes });
 }

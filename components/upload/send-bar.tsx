@@ -10,7 +10,7 @@ export function SendBar({ ready, sending, progress, onSend, onCancel }: { ready:
           <div className="h-2 min-w-48 flex-1 overflow-hidden rounded bg-ink/10 dark:bg-white/10" role="progressbar" aria-label="Upload progress" aria-valuemin={0} aria-valuemax={100} aria-valuenow={pct}>
             <div className="h-full bg-tide-500 transition-[width]" style={{ width: `${pct}%` }} />
           </div>
-          <span className="w-28 text-xs tabular-nums text-ink-soft dark:text-white/70">{pct < 100 ? `${pct} % sent` : "judging on the server…"}</span>
+          <span className="whitespace-nowrap text-xs tabular-nums text-ink-soft dark:text-white/70">{pct < 100 ? `${pct} % sent` : "judging on the server…"}</span>
           <button type="button" onClick={onCancel} className="rounded px-2 py-1 text-sm text-ink-soft underline dark:text-white/70">
             Cancel
           </button>

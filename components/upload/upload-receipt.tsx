@@ -1,11 +1,11 @@
 import Link from "next/link";
-import { QuantityTable } from "@/components/quantities/quantity-table";
 import { Panel } from "@/components/ui/panel";
 import { VerdictBadge } from "@/components/ui/verdict-badge";
 import type { UploadReceipt } from "./receipt-types";
+import { ReceiptRun } from "./receipt-run";
 
 /** What the server stored and how it judged it: the build, then every run with its quantities. */
-export function UploadReceiptView({ receipt, onAgain }: { receipt: UploadReceipt; onAgain: () => void }) {
+export function UploadReceiptView({ receipt, plotsFirst, onAgain }: { receipt: UploadReceipt; plotsFirst: boolean; onAgain: () => void }) {
   const { build, runs } = receipt;
   const c = build.runCounts;
   return (
@@ -31,17 +31,7 @@ export function UploadReceiptView({ receipt, onAgain }: { receipt: UploadReceipt
       </div>
       <div className="mt-4 space-y-5">
         {runs.map((run) => (
-          <section key={run.id} className="border-t border-ink/10 pt-3 dark:border-white/10" data-run-id={run.id}>
-            <header className="mb-2 flex flex-wrap items-center gap-x-3 gap-y-1 text-sm">
-              <VerdictBadge verdict={run.verdict} />
-              <Link href={`/builds/${build.id}/runs/${run.id}`} className="font-mono text-tide-700 underline-offset-2 hover:underline dark:text-tide-300">
-                {run.case} · {run.model} · {run.grid}
-              </Link>
-              <span className="text-xs text-ink-soft dark:text-white/60">{run.status.toLowerCase()}</span>
-              <span className="ml-auto text-xs text-ink-faint">Plots of every series and fit are on the run page.</span>
-            </header>
-            <QuantityTable quantities={run.quantities} sortByVerdict />
-          </section>
+          <ReceiptRun key={run.id} buildId={build.id} run={run} plotsFirst={plotsFirst} />
         ))}
       </div>
     </Panel>

@@ -1,14 +1,16 @@
 "use client";
 
+import { useApolloClient } from "@apollo/client/react";
 import { useDeferredValue, useEffect, useMemo, useRef, useState } from "react";
 import { Panel } from "@/components/ui/panel";
 import { EmptyState } from "@/components/ui/states";
 import type { FieldIssue } from "@/lib/errors";
-import { detectUploadKind, type UploadKind, type UploadSeriesKey } from "@/lib/validation/upload";
-import { checkUpload, csvInputOf, type RunFields, type UploadCheck } from "./check-upload";
+import type { UploadKind } from "@/lib/validation/upload";
+import { checkChosenFile, csvInputOf, type RunFields } from "./check-upload";
 import { CheckSummary } from "./check-summary";
 import { CsvRunForm, SeriesKeyPicker } from "./csv-run-form";
 import { FileDrop } from "./file-drop";
+import { forgetStaleReads } from "./forget-stale-reads";
 import { FormatSwitch } from "./format-switch";
 import { IssueList } from "./issue-list";
 import type { UploadReceipt } from "./receipt-types";
@@ -34,6 +36,7 @@ export function UploadWorkbench({ maxBytes }: { maxBytes: number }) {
   const [text, setText] = useState<string | null>(null);
   const [phase, setPhase] = useState<Phase>({ name: "editing" });
   const receiptRef = useRef<HTMLDivElement>(null);
+  const client = useApolloClient();
 
   useEffect(() => {
     let live = true;
@@ -50,7 +53,7 @@ export function UploadWorkbench({ maxBytes }: { maxBytes: number }) {
   const seriesKey = useDeferredValue(url.seriesKey);
   const kind = useDeferredValue(url.kind);
   const check = useMemo(
-    () => runCheck({ file, text: deferredText, kind, fields: JSON.parse(fieldsKey) as RunFields, seriesKey, maxBytes }),
+    () => checkChosenFile({ file, text: deferredText, kind, fields: JSON.parse(fieldsKey) as RunFields, seriesKey, maxBytes }),
     [file, deferredText, kind, fieldsKey, seriesKey, maxBytes],
   );
 
@@ -72,6 +75,7 @@ export function UploadWorkbench({ maxBytes }: { maxBytes: number }) {
     setPhase({ name: "sending", progress: 0, abort: request.abort });
     request.done.then((outcome) => {
       setPhase(outcome.ok ? { name: "sent", receipt: outcome.receipt } : { name: "refused", message: outcome.message, issues: outcome.issues });
+      if (outcome.ok) forgetStaleReads(client);
       // The receipt renders below the form; bring it into view once it is there.
       if (outcome.ok) requestAnimationFrame(() => receiptRef.current?.scrollIntoView({ behavior: "smooth", block: "start" }));
     });
@@ -122,7 +126,7 @@ export function UploadWorkbench({ maxBytes }: { maxBytes: number }) {
                 Reading {file.name}…
               </p>
             ) : (
-              <CheckSummary check={check} />
+              <CheckSummary check={check} seriesKey={url.kind === "csv" ? url.seriesKey : null} />
             )}
             {phase.name !== "sent" && (
               <SendBar ready={current && !!check && check.issues.length === 0} sending={phase.name === "sending"} progress={phase.name === "sending" ? phase.progress : 0} onSend={send} onCancel={() => phase.name === "sending" && phase.abort()} />
@@ -134,31 +138,8 @@ export function UploadWorkbench({ maxBytes }: { maxBytes: number }) {
         </Panel>
       </div>
       <div ref={receiptRef} className="scroll-mt-4">
-        {phase.name === "sent" && <UploadReceiptView receipt={phase.receipt} onAgain={again} />}
+        {phase.name === "sent" && <UploadReceiptView receipt={phase.receipt} plotsFirst={phase.receipt.runs.length === 1} onAgain={again} />}
       </div>
     </>
   );
-}
-
-interface CheckArgs {
-  file: File | null;
-  text: string | null;
-  kind: UploadKind;
-  fields: RunFields;
-  seriesKey: UploadSeriesKey | null;
-  maxBytes: number;
-}
-
-function runCheck({ file, text, kind, fields, seriesKey, maxBytes }: CheckArgs): UploadCheck | null {
-  if (!file) return null;
-  const fileInfo = { name: file.name, type: file.type, size: file.size, text: text ?? "" };
-  // Too large: say so without reading it (the server would refuse it anyway).
-  if (file.size > maxBytes) return checkUpload({ file: fileInfo, fields: null, seriesKey: null, maxBytes });
-  if (text === null) return null;
-  const detected = detectUploadKind(fileInfo);
-  if (detected !== kind) {
-    const message = `looks like a ${detected.toUpperCase()} file (by its name or first character), but ${kind.toUpperCase()} is chosen above`;
-    return { kind, issues: [{ path: "file", message }], build: null, runs: [], csv: null };
-  }
-  return checkUpload({ file: fileInfo, fields: kind === "csv" ? fields : null, seriesKey: kind === "csv" ? seriesKey : null, maxBytes });
 }

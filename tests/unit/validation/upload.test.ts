@@ -3,6 +3,7 @@ import { AppError } from "@/lib/errors";
 import { parseSubmission } from "@/lib/services/ingest";
 import { assembleUpload, describeUploadIssues, detectUploadKind, locateCsvIssues, readResultsJson } from "@/lib/validation/upload";
 import { readSeriesCsv } from "@/lib/validation/upload-csv";
+import { checkChosenFile, csvInputOf, type RunFields } from "@/components/upload/check-upload";
 
 // Manual uploads become the raw CI-contract submission; these check the file
 // formats and that every refusal names the field or the file row and column.
@@ -131,5 +132,35 @@ describe("assembleUpload", () => {
     }
     expect(issues[0].path).toBe("input.runs[0].series[0].x[2]");
     expect(issues[0].message).toMatch(/strictly increasing.*\(file row 5, column t\)$/);
+  });
+});
+
+describe("the browser's check before sending", () => {
+  const fields: RunFields = { solver: "Cormorant", version: "4.3.0", commit: "not-hex", branch: "test/upload", pipelineUrl: "", case: "decaying-hit", model: "k-epsilon", grid: "", status: "COMPLETED" };
+  const text = "t,k\n0,1.5\n1,1.0\n1,0.8\n";
+  const file = { name: "k.csv", type: "text/csv", size: text.length, text } as unknown as File;
+
+  it("reports the same field paths the server's ingest does", () => {
+    const check = checkChosenFile({ file, text, kind: "csv", fields, seriesKey: "k_decay", maxBytes: 1e6 });
+    const assembled = assembleUpload({ input: csvInputOf(fields), seriesKey: "k_decay", file: { name: "k.csv", type: "text/csv", text } });
+    if (!assembled.ok) throw new Error("assembly should pass");
+    let server: { path: string; message: string }[] = [];
+    try {
+      parseSubmission(assembled.value.unsafeInput);
+    } catch (error) {
+      if (!(error instanceof AppError)) throw error;
+      server = locateCsvIssues(error.issues, assembled.value.csv);
+    }
+    expect(check?.issues).toEqual(server);
+    expect(check?.issues.map((i) => i.path)).toEqual(["input.build.commit", "input.runs[0].series[0].x[2]"]);
+  });
+
+  it("refuses a file over the size limit without reading it, and a file of the other kind", () => {
+    expect(checkChosenFile({ file, text: null, kind: "csv", fields, seriesKey: "k_decay", maxBytes: 10 })?.issues[0]).toMatchObject({ path: "file", message: expect.stringMatching(/limit/) });
+    expect(checkChosenFile({ file, text, kind: "json", fields, seriesKey: null, maxBytes: 1e6 })?.issues[0]).toMatchObject({ path: "file", message: expect.stringMatching(/looks like a CSV/) });
+  });
+
+  it("leaves the grid to the server's default when the field is empty", () => {
+    expect(csvInputOf(fields)).toMatchObject({ runs: [{ grid: null }] });
   });
 });
