@@ -1,28 +1,32 @@
 "use client";
 
-import { usePathname, useRouter, useSearchParams } from "next/navigation";
+import { usePathname, useSearchParams } from "next/navigation";
 import { useCallback } from "react";
 
 /**
  * The page's query string as state: read with `params`, change with `update`
- * (null or "" removes a key). Uses router.replace so that filtering does not
- * pile up history entries, and keeps the scroll position.
+ * (null or "" removes a key).
+ *
+ * Writes go through window.history.replaceState, which Next's router observes
+ * (useSearchParams updates) without a server round trip: selecting a cell or a
+ * page re-renders only the client leaves, and filtering piles up no history
+ * entries. Each update starts from the URL as it is now, not from the params of
+ * the last render, so two quick changes cannot overwrite each other.
  */
 export function useQueryParams() {
-  const router = useRouter();
   const pathname = usePathname();
   const params = useSearchParams();
   const update = useCallback(
     (patch: Record<string, string | number | null | undefined>) => {
-      const next = new URLSearchParams(params.toString());
+      const next = new URLSearchParams(window.location.search);
       for (const [key, value] of Object.entries(patch)) {
         if (value === null || value === undefined || value === "") next.delete(key);
         else next.set(key, String(value));
       }
       const qs = next.toString();
-      router.replace(qs ? `${pathname}?${qs}` : pathname, { scroll: false });
+      window.history.replaceState(null, "", qs ? `${pathname}?${qs}` : pathname);
     },
-    [params, pathname, router],
+    [pathname],
   );
   return { params, update };
 }
