@@ -5,7 +5,7 @@ import { useQueryParams } from "@/components/data-table/use-query-params";
 import { Panel } from "@/components/ui/panel";
 import { EmptyState, ErrorNotice, LoadingBlock } from "@/components/ui/states";
 import { formatSig } from "@/lib/format/numbers";
-import { BUILD_COMPARISON } from "@/graphql/operations/builds";
+import { BUILD_COMPARISON } from "@/graphql/operations/build-comparison";
 import { ComparePicker } from "./compare-picker";
 import { hasChange, summariseCoefficientChanges } from "./compare-summary";
 import { CompareTable } from "./compare-table";

@@ -1,7 +1,7 @@
 "use client";
 
 import { useQuery } from "@apollo/client/react";
-import { COMPARE_CANDIDATES, type BuildBrief } from "@/graphql/operations/builds";
+import { COMPARE_CANDIDATES, type BuildBrief } from "@/graphql/operations/build-comparison";
 
 /**
  * Chooses the build to compare with: the branch baseline (default, empty value) or

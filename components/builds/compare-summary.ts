@@ -1,5 +1,5 @@
 import { VERDICT_ORDER, type Verdict } from "@/lib/analysis";
-import type { ComparedRunRow } from "@/graphql/operations/builds";
+import type { ComparedRunRow } from "@/graphql/operations/build-comparison";
 
 // Condenses a comparison into what a reviewer reads first. Pure.
 

@@ -1,6 +1,6 @@
 import Link from "next/link";
 import { formatSig } from "@/lib/format/numbers";
-import type { ComparedRunRow } from "@/graphql/operations/builds";
+import type { ComparedRunRow } from "@/graphql/operations/build-comparison";
 import { displayUnit } from "@/components/quantities/quantity-cells";
 import { formatDifference, formatDifferencePct, formatValue } from "@/components/quantities/format-value";
 import { verdictDirection } from "./compare-summary";
