@@ -6,8 +6,9 @@ import { formatSig } from "@/lib/format/numbers";
 import { exponentSuffix, formatLinearTick, formatLogTick, linearTicks, logMinorTicks, logTicks, niceStep } from "./axis-ticks";
 import { PLOT_COLOUR_VARS, plotTheme } from "./chart-theme";
 import { drawBands, drawCurves, drawErrorBars, drawMarkers, drawMinorGrid, drawRules, type LayerGeometry } from "./plot-layers";
+import { chooseNoteCorner, CORNERS, estimateNoteSize } from "./note-corner";
 import { PlotLegend, PlotNotes } from "./plot-legend";
-import type { PlotAxis, PlotBand, PlotCurve, PlotErrorBar, PlotMarkers, PlotNote, PlotRule } from "./plot-types";
+import type { NoteCorner, PlotAxis, PlotBand, PlotCurve, PlotErrorBar, PlotMarkers, PlotNote, PlotRule, XY } from "./plot-types";
 import { useElementWidth } from "./use-element-width";
 
 type Series = { id: string; data: { x: number; y: number }[] };
@@ -62,6 +63,7 @@ export function PlotFrame(props: PlotFrameProps) {
   const visible = useMemo(() => markers.map((m) => ({ ...m, points: m.points.filter((p) => inAxis(x, p.x) && inAxis(y, p.y)) })), [markers, x, y]);
   const data: Series[] = useMemo(() => visible.map((m) => ({ id: m.id, data: m.points.map((p) => ({ x: p.x, y: p.y })) })), [visible]);
   const layers = useMemo(() => buildLayers(props, clipId), [props, clipId]);
+  const notes = useMemo(() => placeNotes(props, innerWidth, innerHeight), [props, innerWidth, innerHeight]);
   const xAxis = axisProps(x, innerWidth, 36);
   const yAxis = axisProps(y, innerHeight, -52);
 
@@ -88,13 +90,40 @@ export function PlotFrame(props: PlotFrameProps) {
             tooltip={(t: PointTooltipProps<Series>) => <MarkerTooltip {...t} markers={visible} />}
           />
         )}
-        {width >= MIN_WIDTH && !notesBelow && <PlotNotes notes={props.notes ?? []} box={{ left: MARGIN.left, top: MARGIN.top, width: innerWidth, height: innerHeight }} />}
+        {width >= MIN_WIDTH && !notesBelow && <PlotNotes notes={notes} box={{ left: MARGIN.left, top: MARGIN.top, width: innerWidth, height: innerHeight }} />}
       </div>
-      {notesBelow && <PlotNotes notes={props.notes ?? []} box={{ left: 0, top: 0, width: innerWidth, height: innerHeight }} below />}
+      {notesBelow && <PlotNotes notes={notes} box={{ left: 0, top: 0, width: innerWidth, height: innerHeight }} below />}
       <PlotLegend curves={props.curves ?? []} markers={markers} bands={props.bands ?? []} />
       {props.footer}
     </div>
   );
+}
+
+/** Resolves "auto" corners, each note to a different corner, against the plotted points. */
+function placeNotes(props: PlotFrameProps, width: number, height: number): (PlotNote & { corner: NoteCorner })[] {
+  const frame = { width, height, toPixel: (p: XY) => toPixel(props.x, props.y, width, height, p) };
+  const samples = (props.markers ?? []).flatMap((m) => m.points);
+  const curvePoints = (props.curves ?? []).flatMap((c) => c.points);
+  const used = new Set<NoteCorner>((props.notes ?? []).flatMap((n) => (n.corner === "auto" ? [] : [n.corner])));
+  return (props.notes ?? []).map((n) => {
+    if (n.corner !== "auto") return { ...n, corner: n.corner };
+    const free = (n.prefer ?? CORNERS).filter((c) => !used.has(c));
+    const corner = chooseNoteCorner(frame, estimateNoteSize(n.lines), samples, curvePoints, free.length ? free : CORNERS);
+    used.add(corner);
+    return { ...n, corner };
+  });
+}
+
+function toPixel(x: PlotAxis, y: PlotAxis, width: number, height: number, p: XY): [number, number] | null {
+  const fx = fraction(x, p.x);
+  const fy = fraction(y, p.y);
+  return fx === null || fy === null ? null : [fx * width, (1 - fy) * height];
+}
+
+function fraction(axis: PlotAxis, v: number): number | null {
+  if (!Number.isFinite(v)) return null;
+  if (axis.kind === "log") return v > 0 ? Math.log(v / axis.min) / Math.log(axis.max / axis.min) : null;
+  return (v - axis.min) / (axis.max - axis.min);
 }
 
 function inAxis(axis: PlotAxis, v: number) {

@@ -112,10 +112,15 @@ export function drawCurves(g: LayerGeometry, curves: PlotCurve[]) {
 }
 
 export function drawMarkers(g: LayerGeometry, sets: PlotMarkers[]) {
-  return sets.map((m) => (
+  return sets.map((m) => {
+    const limit = m.maxGlyphs ?? 150;
+    const dense = m.points.length > limit;
+    const every = dense ? Math.ceil(m.points.length / limit) : 1;
+    return (
     <g key={m.id}>
-      {m.joined && <path d={curvePath(g, m.points)} fill="none" stroke={m.color} strokeWidth={1} strokeOpacity={0.7} />}
+      {(m.joined || dense) && <path d={curvePath(g, m.points)} fill="none" stroke={m.color} strokeWidth={dense ? 1.3 : 1} strokeOpacity={0.7} />}
       {m.points.map((p, i) => {
+        if (i % every !== 0) return null;
         const at = place(g, p.x, p.y);
         return at ? markerGlyph(m.shape, at[0], at[1], m.size ?? 6, m.color, m.hollow ?? false, i) : null;
       })}
@@ -128,7 +133,8 @@ export function drawMarkers(g: LayerGeometry, sets: PlotMarkers[]) {
         ) : null;
       })}
     </g>
-  ));
+    );
+  });
 }
 
 export function drawErrorBars(g: LayerGeometry, bars: PlotErrorBar[]) {

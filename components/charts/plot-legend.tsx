@@ -70,7 +70,7 @@ const CORNER: Record<NoteCorner, string> = {
 };
 
 /** Notes laid over the plot area (inside the axes), one block per corner; below the plot when it is too narrow to share. */
-export function PlotNotes({ notes, box, below = false }: { notes: PlotNote[]; box: { left: number; top: number; width: number; height: number }; below?: boolean }) {
+export function PlotNotes({ notes, box, below = false }: { notes: (PlotNote & { corner: NoteCorner })[]; box: { left: number; top: number; width: number; height: number }; below?: boolean }) {
   if (notes.length === 0) return null;
   if (below) {
     return (
@@ -96,7 +96,7 @@ export function PlotNotes({ notes, box, below = false }: { notes: PlotNote[]; bo
           style={{ left: box.left, top: box.top, width: box.width, height: box.height }}
         >
           <div
-            className="pointer-events-auto max-w-[min(26rem,90%)] rounded border border-ink/10 px-2 py-1 font-mono text-[11px] leading-snug text-ink shadow-sm dark:border-white/15 dark:text-white/90"
+            className="pointer-events-auto max-w-[min(26rem,100%)] rounded border border-ink/10 px-2 py-1 font-mono text-[11px] leading-snug text-ink shadow-sm dark:border-white/15 dark:text-white/90"
             style={{ background: `color-mix(in srgb, ${PLOT_COLOURS.halo} 88%, transparent)` }}
           >
             {n.lines.map((l, i) => (

@@ -57,6 +57,12 @@ export interface PlotMarkers {
   size?: number;
   /** Join the points with a thin line of the same colour (a sampled distribution). */
   joined?: boolean;
+  /**
+   * Most glyphs to draw (default 150). A denser set is drawn as a joined line
+   * with every k-th glyph, so thousands of markers do not merge into a smear
+   * that hides the curves beneath; every point still answers to the pointer.
+   */
+  maxGlyphs?: number;
 }
 
 /** A shaded range across the plot, e.g. the fit window (axis x) or an acceptance band (axis y). */
@@ -96,6 +102,9 @@ export interface NoteLine {
 export type NoteCorner = "top-left" | "top-right" | "bottom-left" | "bottom-right";
 
 export interface PlotNote {
-  corner: NoteCorner;
+  /** A fixed corner, or "auto": the corner covering the fewest samples and curve points. */
+  corner: NoteCorner | "auto";
+  /** With "auto": the order in which corners are tried when several are equally clear. */
+  prefer?: NoteCorner[];
   lines: NoteLine[];
 }

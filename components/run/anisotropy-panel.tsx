@@ -66,7 +66,7 @@ export function AnisotropyPanel({ run }: { run: RunView }) {
             maxWidth={620}
             curves={lumleyCurves}
             markers={[lumleyVertices, ...sampleSets("lumley")]}
-            notes={[{ corner: "top-left", lines: notes }]}
+            notes={[{ corner: "auto", prefer: ["top-left", "bottom-right", "top-right", "bottom-left"], lines: notes }]}
           />
         </div>
         <div>

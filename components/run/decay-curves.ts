@@ -94,7 +94,7 @@ function decayNotes(q: QuantityView | null, analytic: AnalyticExponent | null, h
     const off = q?.value !== null && q?.value !== undefined ? ` (fit ${formatPct(q.value, analytic.n)})` : "";
     notes.push({ text: `closure's own n = ${analytic.formula} → ${formatSig(analytic.n, 5)}${off}`, tone: "faint" });
   }
-  if (hidden > 0) notes.push({ text: `${hidden} sample${hidden > 1 ? "s" : ""} not shown (t − t₀ ≤ 0 or k ≤ 0 on log axes)`, tone: "faint" });
+  if (hidden > 0) notes.push({ text: `${hidden} sample${hidden > 1 ? "s" : ""} not shown (${shifted ? "t − t₀" : "t"} ≤ 0 or k ≤ 0 on log axes)`, tone: "faint" });
   return notes;
 }
 

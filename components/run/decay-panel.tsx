@@ -28,7 +28,7 @@ export function DecayPanel({ run, series }: { run: RunView; series: SeriesView }
         height={340}
         curves={curves}
         markers={[{ id: "data", label: "k posted by the run", points: plot.data, shape: "circle", hollow: true, size: 5, color: PLOT_COLOURS.data }]}
-        notes={[{ corner: "bottom-left", lines: plot.notes }]}
+        notes={[{ corner: "auto", prefer: ["bottom-left", "top-right", "bottom-right", "top-left"], lines: plot.notes }]}
       />
       <PlotFootnotes series={series} sources={[q]} />
     </Panel>

@@ -18,10 +18,9 @@ export function GridStudyPanel({ run, study, definitions }: { run: RunView; stud
   const plot = buildGridStudyPlot(study, { order, extrapolated, gci });
   const def = definitions.find((d) => d.key === study.quantity);
   const markers: PlotMarkers[] = [
-    { id: "grids", label: "value on each grid (fine, medium, coarse)", points: plot.grids, shape: "circle", size: 8, color: PLOT_COLOURS.data },
+    { id: "grids", label: "value on each grid (fine, medium, coarse)", points: plot.grids, shape: "circle", size: 8, joined: true, color: PLOT_COLOURS.data },
     ...(plot.extrapolated ? [{ id: "ext", label: `Richardson-extrapolated φ_ext = ${formatSig(plot.extrapolated.y, 6)} at h = 0`, points: [{ ...plot.extrapolated, tag: "φ_ext" }], shape: "diamond" as const, size: 11, color: PLOT_COLOURS.fit }] : []),
   ];
-  const rising = study.values[study.values.length - 1] > study.values[0];
   return (
     <Panel title="Grid convergence" subtitle={`φ = ${def?.label ?? study.quantity} (${study.quantity}) on three grids against h/h₁ (Celik et al. 2008)`} className="lg:col-span-2">
       <PlotFrame
@@ -33,7 +32,7 @@ export function GridStudyPanel({ run, study, definitions }: { run: RunView; stud
         curves={plot.curve.length ? [{ id: "richardson", label: `φ_ext + (φ₁ − φ_ext)(h/h₁)^p, p = ${formatSig(study.observedOrder, 4)}`, points: plot.curve, style: { color: PLOT_COLOURS.fit, width: 1.8, dash: "6 3" } }] : []}
         errorBars={plot.errorBar ? [{ ...plot.errorBar, color: PLOT_COLOURS.reference }] : []}
         markers={markers}
-        notes={[{ corner: rising ? "top-left" : "bottom-left", lines: plot.notes }]}
+        notes={[{ corner: "auto", prefer: ["top-left", "bottom-left", "top-right", "bottom-right"], lines: plot.notes }]}
         footer={
           plot.errorBar && (
             <p className="mt-1 text-xs text-ink-faint">

@@ -34,7 +34,7 @@ export function MissingDataPanel({ run }: { run: RunView }) {
             <span className="font-medium">{q.label ?? q.key}</span>
             <span className="font-mono text-xs text-ink-faint">{q.key}</span>
             <span className="text-ink-soft dark:text-white/70">
-              — {source ? `no ${source.data} in this run` : "not reported"}: {whyMissing(q)}
+              — {source ? `no ${source.data} in this run: ${whyMissing(q)}` : whyMissing(q)}
             </span>
           </li>
         ))}

@@ -1,7 +1,7 @@
 import { linearExtent, logExtent } from "@/components/charts/axis-ticks";
 import type { NoteLine, XY } from "@/components/charts/plot-types";
 import { formatSig } from "@/lib/format/numbers";
-import { describeBand } from "./note-format";
+import { formatLimits } from "./note-format";
 import { readNumber, whyMissing, type QuantityView } from "./run-data";
 
 // The residual history on a log axis with what the stall rule of
@@ -60,7 +60,9 @@ export function buildResidualPlot(iterations: number[], residuals: number[], q: 
   const from = pairs.length >= 2 ? tailStartIndex(xs) : -1;
   const tail = from >= 0 ? { from, to: pairs.length - 1, trend: tailTrend(xs, ys, from) } : null;
   const target = targetOrders !== null && pairs.length > 0 ? { orders: targetOrders, level: ys[0] * 10 ** -targetOrders } : null;
-  const yRange = logExtent([...ys, ...(target ? [target.level] : [])]);
+  // One decade of headroom above the history keeps the notes off the data.
+  const [yLo, yHi] = logExtent([...ys, ...(target ? [target.level] : [])]);
+  const yRange: [number, number] = [yLo, yHi * 10];
   const [x0, x1] = linearExtent(xs, 0.01);
   return { xRange: [Math.max(x0, Math.min(0, xs[0] ?? 0)), x1], yRange, data: pairs, tail, target, notes: residualNotes(q, targetOrders, pairs.length) };
 }
@@ -70,24 +72,27 @@ function residualNotes(q: QuantityView | null, targetOrders: number | null, samp
   const failure = whyMissing(q);
   if (failure) return [{ text: `residual drop not derived: ${failure}`, tone: "bad" }];
   const drop = q?.value ?? null;
+  const target = targetOrders !== null ? `, target ≥ ${formatSig(targetOrders, 3)}` : "";
   if (drop !== null) {
     notes.push(
       drop < 0
         ? { text: `residual ROSE by ${formatSig(-drop, 3)} orders of magnitude (${q?.verdict})`, tone: "bad" }
-        : { text: `drop ${formatSig(drop, 3)} orders of magnitude (${q?.verdict})`, tone: "strong" },
+        : { text: `drop ${formatSig(drop, 3)} orders of magnitude (${q?.verdict})${target}`, tone: "strong" },
     );
   }
-  if (targetOrders !== null) notes.push({ text: `target: ≥ ${formatSig(targetOrders, 3)} orders (case setting)`, tone: "faint" });
   const tailDrop = readNumber(q?.details, "tailDropOrders");
   if (tailDrop !== null) {
     const trend = tailDrop < 0 ? `rises ${formatSig(-tailDrop, 3)}` : `falls ${formatSig(tailDrop, 3)}`;
-    notes.push({ text: `tail trend (last 20 % of iterations): ${trend} orders` });
+    notes.push({ text: `tail (last 20 % of iterations) ${trend} orders` });
   }
   if (q?.details.stalled === true) {
     notes.push({ text: tailDrop !== null && tailDrop < 0 ? "STALLED: the residual rises over the tail" : "STALLED: tail falls < 0.1 orders, target not reached", tone: "bad" });
   }
-  const band = describeBand(q, 3);
-  if (band) notes.push({ text: band, tone: "faint" });
-  notes.push({ text: `${samples} samples`, tone: "faint" });
+  if (drop !== null && drop < 0 && targetOrders !== null) notes.push({ text: `target ≥ ${formatSig(targetOrders, 3)} orders`, tone: "faint" });
+  notes.push({ text: `${samples} samples; band: ${formatLimitsOf(q)}`, tone: "faint" });
   return notes;
+}
+
+function formatLimitsOf(q: QuantityView | null): string {
+  return q && (q.lower !== null || q.upper !== null) ? `${formatLimits(q.lower, q.upper, 3)} orders` : "none";
 }

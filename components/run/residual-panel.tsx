@@ -21,8 +21,6 @@ export function ResidualPanel({ run, series, caseParameters }: { run: RunView; s
     ? [{ axis: "y", at: plot.target.level, style: { color: PLOT_COLOURS.reference, dash: "6 4" }, label: `target: ${formatSig(plot.target.orders, 3)} orders below the first residual`, labelAt: "start" }]
     : [];
   const stalled = q?.details.stalled === true;
-  // A diverging history climbs into the top-right corner; the notes move out of its way.
-  const rose = plot.data.length > 1 && plot.data[plot.data.length - 1].y > plot.data[0].y;
   return (
     <Panel title="Residual history" subtitle="steady-solve residual against iteration, logarithmic residual axis">
       <PlotFrame
@@ -34,7 +32,7 @@ export function ResidualPanel({ run, series, caseParameters }: { run: RunView; s
         rules={rules}
         curves={plot.tail?.trend.length ? [{ id: "trend", label: "least-squares trend over the tail", points: plot.tail.trend, style: { color: stalled ? PLOT_COLOURS.bad : PLOT_COLOURS.fit, width: 2.4 } }] : []}
         markers={[{ id: "data", label: "residual posted by the run", points: plot.data, shape: "circle", size: 2.5, joined: true, color: PLOT_COLOURS.data }]}
-        notes={[{ corner: rose ? "bottom-right" : "top-right", lines: plot.notes }]}
+        notes={[{ corner: "auto", prefer: ["top-right", "bottom-left", "bottom-right", "top-left"], lines: plot.notes }]}
       />
       <PlotFootnotes series={series} sources={[q]} />
     </Panel>

@@ -53,7 +53,9 @@ export function buildSkinFrictionPlot(input: SkinFrictionInput): SkinFrictionPlo
   const scale = mode === "step" && stepHeight ? stepHeight : 1;
   const xLog = mode === "reynolds" && input.x.every((v) => v > 0);
   const data = input.x.map((x, i) => ({ x: x / scale, y: input.cf[i] })).filter((p) => Number.isFinite(p.x) && Number.isFinite(p.y));
-  const xRange = xLog ? logExtent(data.map((p) => p.x)) : linearExtent(data.map((p) => p.x), 0.02);
+  // A station outside the series (c_f there cannot be derived) stays in view.
+  const xs = [...data.map((p) => p.x), ...(station !== null ? [station] : [])];
+  const xRange = xLog ? logExtent(xs) : linearExtent(xs, 0.02);
 
   const correlations =
     mode === "reynolds" && xLog
@@ -69,7 +71,8 @@ export function buildSkinFrictionPlot(input: SkinFrictionInput): SkinFrictionPlo
   // c_f = 0 (separation, the reattachment criterion) is always in view: c_f is
   // read against it, and on the flat plate the empty strip above it holds the notes.
   const [lo, hi] = linearExtent([...ys, 0], 0.06);
-  const yRange: [number, number] = [Math.min(...ys) >= 0 ? 0 : lo, hi];
+  // Behind a step the notes go under the recirculation bubble: room is made there.
+  const yRange: [number, number] = [Math.min(...ys) >= 0 ? 0 : mode === "step" ? lo - 0.4 * (hi - lo) : lo, hi];
 
   const stationInfo = station !== null
     ? { x: station, cf: cfAtX?.value ?? null, label: readString(cfAtX?.details, "stationLabel") ?? readString(caseParameters, "cfStationLabel") ?? `x = ${formatSig(station, 5)}` }
@@ -102,7 +105,7 @@ function cfNotes(input: SkinFrictionInput, mode: CfMode, station: SkinFrictionPl
     const failure = whyMissing(input.reattachment);
     notes.push(failure ? { text: `no reattachment: ${failure}`, tone: "bad" } : { text: `x_r/H = ${valueWithVerdict(input.reattachment, 4)}`, tone: "strong" });
     const crossings = readNumbers(input.reattachment.details, "crossings");
-    if (crossings.length > 1) notes.push({ text: `${crossings.length} sign changes − to +; the downstream-most is the primary reattachment`, tone: "faint" });
+    if (crossings.length > 1) notes.push({ text: `${crossings.length} changes − to +; the last is the reattachment`, tone: "faint" });
     const band = describeBand(input.reattachment, 3);
     if (band) notes.push({ text: band });
   }

@@ -60,7 +60,7 @@ export function SkinFrictionPanel({ run, series, caseParameters }: { run: RunVie
         rules={rules}
         curves={curves}
         markers={markers}
-        notes={plot.notes.length ? [{ corner: plot.mode === "reynolds" ? "bottom-left" : plot.mode === "step" ? "bottom-right" : "top-right", lines: plot.notes }] : []}
+        notes={plot.notes.length ? [{ corner: "auto", prefer: plot.mode === "step" ? ["bottom-right", "top-left", "top-right", "bottom-left"] : ["bottom-left", "top-right", "bottom-right", "top-left"], lines: plot.notes }] : []}
       />
       <PlotFootnotes series={series} sources={[cfAtX, reattachment]} />
     </Panel>

@@ -54,8 +54,10 @@ export function buildWallLawPlot(input: WallLawInput): WallLawPlot {
     if (x > 0) data.push({ x, y });
     else hiddenAtWall += 1;
   });
-  const xRange = logExtent(data.map((p) => p.x));
   const window = readWindow(input.kappa?.details) ?? input.caseWindow;
+  // The window is always in view: a fit that failed for want of samples in it
+  // shows the gap between the profile and the window.
+  const xRange = logExtent([...data.map((p) => p.x), ...(window ? [window.yPlusMin, window.yPlusMax] : [])]);
 
   const kFit = input.kappa?.value ?? null;
   const bFit = input.logB?.value ?? null;
@@ -75,7 +77,9 @@ export function buildWallLawPlot(input: WallLawInput): WallLawPlot {
   const spalding = sampleCurve(logSpace(xRange[0], xRange[1], 160), (y) => spaldingUPlus(y, SPALDING.kappa, SPALDING.b));
   const sublayer = xRange[0] < SUBLAYER_TOP ? sampleCurve(logSpace(xRange[0], SUBLAYER_TOP, 30), (y) => y) : [];
   const uMax = Math.max(...data.map((p) => p.y), 1);
-  const yRange: [number, number] = [Math.min(0, linearExtent(data.map((p) => p.y))[0]), uMax * 1.12];
+  // Headroom above the profile keeps the top-left corner (small y+, large u+,
+  // never reached by a wall profile) free for the notes.
+  const yRange: [number, number] = [Math.min(0, linearExtent(data.map((p) => p.y))[0]), uMax * 1.25];
 
   return { xRange, yRange, data, hiddenAtWall, window, fitted, reference, spalding, sublayer, notes: wallLawNotes(input, window, hiddenAtWall) };
 }

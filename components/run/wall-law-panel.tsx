@@ -54,7 +54,7 @@ export function WallLawPanel({ run, series, caseParameters }: { run: RunView; se
             bands={windowBand}
             curves={curves}
             markers={[{ id: "data", label: "u⁺ posted by the run", points: plot.data, shape: "circle", hollow: true, size: 5, color: PLOT_COLOURS.data }]}
-            notes={[{ corner: "bottom-right", lines: plot.notes }]}
+            notes={[{ corner: "auto", prefer: ["top-left", "bottom-right", "top-right", "bottom-left"], lines: plot.notes }]}
           />
         </div>
         <div className="min-w-0">
