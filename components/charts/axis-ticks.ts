@@ -67,7 +67,7 @@ export function logTicks(min: number, max: number): number[] {
   const last = Math.floor(Math.log10(max) + 1e-9);
   const decades = last - first + 1;
   if (decades >= 3) {
-    const every = Math.ceil(decades / 8);
+    const every = Math.ceil(decades / 10);
     const ticks: number[] = [];
     for (let e = first; e <= last; e++) if ((e - first) % every === 0) ticks.push(10 ** e);
     return ticks;
@@ -140,11 +140,20 @@ export function formatLinearTick(value: number, step: number, exponent = 0): str
   return /^-0(\.0*)?$/.test(text) ? text.slice(1) : text.replace(/^-/, MINUS);
 }
 
-/** Tick label of a log axis: plain numbers from 0.01 to 10⁴, powers of ten (with a 2× or 5× mantissa) beyond. */
-export function formatLogTick(value: number): string {
+/** Whether a log axis writes every tick as a power of ten: when any tick lies outside 0.01 … 10⁴. */
+export function needsPowersOfTen(ticks: number[]): boolean {
+  return ticks.some((t) => t < 0.01 || t >= 1e4);
+}
+
+/**
+ * Tick label of a log axis: plain numbers from 0.01 to 10⁴, powers of ten (with
+ * a 2× or 5× mantissa) beyond; `powers` writes every tick of the axis that way
+ * so one axis never mixes "0.1" with "10⁻³".
+ */
+export function formatLogTick(value: number, powers = false): string {
   if (!(value > 0)) return "";
   const e = Math.floor(Math.log10(value) + 1e-9);
   const mantissa = Math.round(value / 10 ** e);
-  if (value >= 0.01 && value < 1e4) return Number(value.toPrecision(6)).toString();
+  if (!powers && value >= 0.01 && value < 1e4) return Number(value.toPrecision(6)).toString();
   return mantissa === 1 ? formatPowerOfTen(e) : `${mantissa}×${formatPowerOfTen(e)}`;
 }

@@ -1,17 +1,17 @@
 "use client";
 
-import { Line, type LineCustomSvgLayerProps, type LineSvgLayer, type PointTooltipProps } from "@nivo/line";
+import { isPoint, Line, type LineCustomSvgLayerProps, type LineSvgLayer, type PointTooltipProps } from "@nivo/line";
 import { useId, useMemo, type ReactNode } from "react";
-import { formatSig } from "@/lib/format/numbers";
-import { exponentSuffix, formatLinearTick, formatLogTick, linearTicks, logMinorTicks, logTicks, niceStep } from "./axis-ticks";
+import { exponentSuffix, formatLinearTick, formatLogTick, linearTicks, logMinorTicks, logTicks, needsPowersOfTen, niceStep } from "./axis-ticks";
 import { PLOT_COLOUR_VARS, plotTheme } from "./chart-theme";
 import { drawBands, drawCurves, drawErrorBars, drawMarkers, drawMinorGrid, drawRules, type LayerGeometry } from "./plot-layers";
-import { chooseNoteCorner, CORNERS, estimateNoteSize } from "./note-corner";
 import { PlotLegend, PlotNotes } from "./plot-legend";
-import type { NoteCorner, PlotAxis, PlotBand, PlotCurve, PlotErrorBar, PlotMarkers, PlotNote, PlotRule, XY } from "./plot-types";
+import { placeNotes } from "./place-notes";
+import { MarkerTooltip } from "./plot-tooltip";
+import type { MarkerPoint, PlotAxis, PlotBand, PlotCurve, PlotErrorBar, PlotMarkers, PlotNote, PlotRule } from "./plot-types";
 import { useElementWidth } from "./use-element-width";
 
-type Series = { id: string; data: { x: number; y: number }[] };
+export type Series = { id: string; data: { x: number; y: number }[] };
 
 export interface PlotFrameProps {
   /** Read by screen readers in place of the picture. */
@@ -31,6 +31,8 @@ export interface PlotFrameProps {
   /** Widest the plot area may get with equalAspect (keeps a triangle from filling a wide screen). */
   maxWidth?: number;
   footer?: ReactNode;
+  /** Called with the marker set and the point a click landed nearest to. */
+  onPointClick?: (setId: string, point: MarkerPoint) => void;
 }
 
 const MARGIN = { top: 14, right: 18, bottom: 46, left: 66 };
@@ -63,7 +65,10 @@ export function PlotFrame(props: PlotFrameProps) {
   const visible = useMemo(() => markers.map((m) => ({ ...m, points: m.points.filter((p) => inAxis(x, p.x) && inAxis(y, p.y)) })), [markers, x, y]);
   const data: Series[] = useMemo(() => visible.map((m) => ({ id: m.id, data: m.points.map((p) => ({ x: p.x, y: p.y })) })), [visible]);
   const layers = useMemo(() => buildLayers(props, clipId), [props, clipId]);
-  const notes = useMemo(() => placeNotes(props, innerWidth, innerHeight), [props, innerWidth, innerHeight]);
+  const notes = useMemo(
+    () => placeNotes({ x: props.x, y: props.y, notes: props.notes ?? [], markers: props.markers ?? [], curves: props.curves ?? [], width: innerWidth, height: innerHeight }),
+    [props.x, props.y, props.notes, props.markers, props.curves, innerWidth, innerHeight],
+  );
   const xAxis = axisProps(x, innerWidth, 36);
   const yAxis = axisProps(y, innerHeight, -52);
 
@@ -87,7 +92,17 @@ export function PlotFrame(props: PlotFrameProps) {
             layers={layers}
             useMesh
             enableCrosshair={false}
-            tooltip={(t: PointTooltipProps<Series>) => <MarkerTooltip {...t} markers={visible} />}
+            tooltip={(t: PointTooltipProps<Series>) => <MarkerTooltip {...t} markers={visible} xSymbol={x.symbol} ySymbol={y.symbol} />}
+            onClick={
+              props.onPointClick
+                ? (datum) => {
+                    if (!isPoint(datum)) return;
+                    const set = visible.find((m) => m.id === datum.seriesId);
+                    const point = set?.points[datum.indexInSeries];
+                    if (set && point) props.onPointClick?.(set.id, point);
+                  }
+                : undefined
+            }
           />
         )}
         {width >= MIN_WIDTH && !notesBelow && <PlotNotes notes={notes} box={{ left: MARGIN.left, top: MARGIN.top, width: innerWidth, height: innerHeight }} />}
@@ -97,33 +112,6 @@ export function PlotFrame(props: PlotFrameProps) {
       {props.footer}
     </div>
   );
-}
-
-/** Resolves "auto" corners, each note to a different corner, against the plotted points. */
-function placeNotes(props: PlotFrameProps, width: number, height: number): (PlotNote & { corner: NoteCorner })[] {
-  const frame = { width, height, toPixel: (p: XY) => toPixel(props.x, props.y, width, height, p) };
-  const samples = (props.markers ?? []).flatMap((m) => m.points);
-  const curvePoints = (props.curves ?? []).flatMap((c) => c.points);
-  const used = new Set<NoteCorner>((props.notes ?? []).flatMap((n) => (n.corner === "auto" ? [] : [n.corner])));
-  return (props.notes ?? []).map((n) => {
-    if (n.corner !== "auto") return { ...n, corner: n.corner };
-    const free = (n.prefer ?? CORNERS).filter((c) => !used.has(c));
-    const corner = chooseNoteCorner(frame, estimateNoteSize(n.lines), samples, curvePoints, free.length ? free : CORNERS);
-    used.add(corner);
-    return { ...n, corner };
-  });
-}
-
-function toPixel(x: PlotAxis, y: PlotAxis, width: number, height: number, p: XY): [number, number] | null {
-  const fx = fraction(x, p.x);
-  const fy = fraction(y, p.y);
-  return fx === null || fy === null ? null : [fx * width, (1 - fy) * height];
-}
-
-function fraction(axis: PlotAxis, v: number): number | null {
-  if (!Number.isFinite(v)) return null;
-  if (axis.kind === "log") return v > 0 ? Math.log(v / axis.min) / Math.log(axis.max / axis.min) : null;
-  return (v - axis.min) / (axis.max - axis.min);
 }
 
 function inAxis(axis: PlotAxis, v: number) {
@@ -141,7 +129,8 @@ function axisProps(axis: PlotAxis, length: number, legendOffset: number) {
   const tickValues = axis.ticks ?? (axis.kind === "log" ? logTicks(axis.min, axis.max) : linearTicks(axis.min, axis.max, target));
   const step = tickValues.length > 1 ? tickValues[1] - tickValues[0] : niceStep(axis.min, axis.max, target);
   const exponent = axis.kind === "linear" ? (axis.exponent ?? 0) : 0;
-  const format = (v: number | string | Date) => (axis.kind === "log" ? formatLogTick(Number(v)) : formatLinearTick(Number(v), step, exponent));
+  const powers = axis.kind === "log" && needsPowersOfTen(tickValues);
+  const format = (v: number | string | Date) => (axis.kind === "log" ? formatLogTick(Number(v), powers) : formatLinearTick(Number(v), step, exponent));
   const legend = exponent === 0 ? axis.label : <>{axis.label}{exponentSuffix(exponent)}</>;
   return { tickValues, format, legend, legendPosition: "middle" as const, legendOffset, tickSize: 4, tickPadding: 4 };
 }
@@ -184,18 +173,4 @@ function buildLayers(props: PlotFrameProps, clipId: string): LineSvgLayer<Series
     );
   };
   return ["grid", under, "axes", over, "mesh"];
-}
-
-function MarkerTooltip({ point, markers }: PointTooltipProps<Series> & { markers: PlotMarkers[] }) {
-  const set = markers.find((m) => m.id === point.seriesId);
-  const source = set?.points[point.indexInSeries];
-  return (
-    <div className="rounded bg-white px-2 py-1 font-mono text-xs text-ink shadow">
-      <div className="font-sans font-semibold">{set?.label ?? point.seriesId}</div>
-      <div>
-        x = {formatSig(Number(point.data.x), 5)}, y = {formatSig(Number(point.data.y), 5)}
-      </div>
-      {source?.note && <div className="font-sans text-ink-soft">{source.note}</div>}
-    </div>
-  );
 }

@@ -54,6 +54,8 @@ export function markerGlyph(shape: MarkerShape, x: number, y: number, size: numb
       return <path key={key} {...common} d={`M${x},${y - r * 1.25}L${x + r * 1.1},${y}L${x},${y + r * 1.25}L${x - r * 1.1},${y}Z`} />;
     case "triangle":
       return <path key={key} {...common} d={`M${x},${y - r * 1.2}L${x + r * 1.1},${y + r * 0.75}L${x - r * 1.1},${y + r * 0.75}Z`} />;
+    case "ring":
+      return <circle key={key} cx={x} cy={y} r={r} stroke={color} strokeWidth={2} fill="none" />;
     case "cross":
       return <path key={key} stroke={color} strokeWidth={2} fill="none" d={`M${x - r},${y - r}L${x + r},${y + r}M${x - r},${y + r}L${x + r},${y - r}`} />;
   }

@@ -15,12 +15,15 @@ export interface PlotAxis {
   max: number;
   /** Axis title; a power of ten moved out of the ticks is appended to it. */
   label: ReactNode;
+  /** Plain-text symbol of the plotted variable for tooltips ("y⁺", "c_f"); "x"/"y" when absent. */
+  symbol?: string;
   /** Move a power of ten into the title (linear axes only; see axisExponent). */
   exponent?: number;
   ticks?: number[];
 }
 
-export type MarkerShape = "circle" | "square" | "diamond" | "triangle" | "cross";
+/** "ring" is an unfilled circle drawn around another marker (a selection). */
+export type MarkerShape = "circle" | "square" | "diamond" | "triangle" | "cross" | "ring";
 
 export interface LineStyle {
   color: string;
@@ -40,6 +43,8 @@ export interface PlotCurve {
 }
 
 export interface MarkerPoint extends XY {
+  /** Identity of the point for selection (e.g. a sample number). */
+  key?: string;
   /** Extra line for the tooltip (e.g. "sample 3, S t = 6"). */
   note?: string;
   /** Short text written beside the marker. */

@@ -64,9 +64,10 @@ export function placeSamples(samples: StressView[]): MapPoints {
     const group = s.realizable ? out.realizable : out.violating;
     const note = `sample ${i + 1}, at = ${formatSig(s.at, 4)}, k = ${formatSig(s.k, 4)}, F = ${formatSig(s.lumleyF, 3)}`;
     const tag = tagged ? formatSig(s.at, 3) : undefined;
+    const key = String(i + 1);
     const placed = s.xi !== null && s.eta !== null;
-    if (placed) group.lumley.push({ x: s.xi as number, y: s.eta as number, note, tag });
-    if (s.barycentricX !== null && s.barycentricY !== null) group.barycentric.push({ x: s.barycentricX, y: s.barycentricY, note, tag });
+    if (placed) group.lumley.push({ x: s.xi as number, y: s.eta as number, note, tag, key });
+    if (s.barycentricX !== null && s.barycentricY !== null) group.barycentric.push({ x: s.barycentricX, y: s.barycentricY, note, tag, key });
     if (!placed && !s.realizable) out.unplaced += 1;
   });
   return out;

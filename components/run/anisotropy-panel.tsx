@@ -7,9 +7,11 @@ import { svgSub } from "@/components/charts/svg-label";
 import { Panel } from "@/components/ui/panel";
 import { formatSig } from "@/lib/format/numbers";
 import { barycentricOutline, BARYCENTRIC_VERTICES, LUMLEY_VERTICES, lumleyBoundaries, mapRange, placeAnisotropy, placeSamples } from "./anisotropy-geometry";
-import { StressViolations } from "./stress-violations";
-import { findQuantity, type RunView } from "./run-data";
 import { valueWithVerdict } from "./note-format";
+import { findQuantity, type RunView } from "./run-data";
+import { SelectedSample } from "./selected-sample";
+import { StressViolations } from "./stress-violations";
+import { useSampleSelection } from "./use-sample-selection";
 
 /** Reynolds-stress samples on the Lumley triangle and the barycentric map, non-realizable ones picked out. */
 export function AnisotropyPanel({ run }: { run: RunView }) {
@@ -17,6 +19,13 @@ export function AnisotropyPanel({ run }: { run: RunView }) {
   const asymptotic = reportedState(run);
   const q = findQuantity(run, "realizability_violations");
   const bad = run.stresses.filter((s) => !s.realizable).length;
+  const [selected, select] = useSampleSelection(run.stresses.length);
+  const pick = (_: string, p: { key?: string }) => (p.key && /^[0-9]+$/.test(p.key) ? select(Number(p.key)) : undefined);
+  const highlight = (map: "lumley" | "barycentric"): PlotMarkers[] => {
+    const all = [...placed.realizable[map], ...placed.violating[map]];
+    const p = selected !== null ? all.find((q) => q.key === String(selected)) : undefined;
+    return p ? [{ id: "selected", label: `selected sample ${selected}`, points: [{ x: p.x, y: p.y, note: p.note }], shape: "ring", size: 18, color: PLOT_COLOURS.extra }] : [];
+  };
 
   const sampleSets = (map: "lumley" | "barycentric"): PlotMarkers[] => [
     { id: "ok", label: "realizable sample, labelled by its position “at”", points: placed.realizable[map], shape: "circle", size: 7, color: PLOT_COLOURS.fit },
@@ -60,12 +69,13 @@ export function AnisotropyPanel({ run }: { run: RunView }) {
           <h3 className="mb-1 text-xs font-semibold tracking-tight">Lumley triangle (Pope&apos;s ξ, η)</h3>
           <PlotFrame
             ariaLabel="Anisotropy invariant map in xi and eta with the Lumley triangle boundaries"
-            x={{ kind: "linear", min: lumleyRange.x[0], max: lumleyRange.x[1], label: "ξ = (III/2)^⅓" }}
-            y={{ kind: "linear", min: lumleyRange.y[0], max: lumleyRange.y[1], label: "η = (−II/3)^½" }}
+            x={{ kind: "linear", min: lumleyRange.x[0], max: lumleyRange.x[1], label: "ξ = (III/2)^⅓", symbol: "ξ" }}
+            y={{ kind: "linear", min: lumleyRange.y[0], max: lumleyRange.y[1], label: "η = (−II/3)^½", symbol: "η" }}
             equalAspect
             maxWidth={620}
             curves={lumleyCurves}
-            markers={[lumleyVertices, ...sampleSets("lumley")]}
+            markers={[lumleyVertices, ...sampleSets("lumley"), ...highlight("lumley")]}
+            onPointClick={pick}
             notes={[{ corner: "auto", prefer: ["top-left", "bottom-right", "top-right", "bottom-left"], lines: notes }]}
           />
         </div>
@@ -73,15 +83,17 @@ export function AnisotropyPanel({ run }: { run: RunView }) {
           <h3 className="mb-1 text-xs font-semibold tracking-tight">Barycentric map (Banerjee et al. 2007)</h3>
           <PlotFrame
             ariaLabel="Barycentric anisotropy map with vertices 1C, 2C and 3C"
-            x={{ kind: "linear", min: baryRange.x[0], max: baryRange.x[1], label: svgSub("x", "B") }}
-            y={{ kind: "linear", min: baryRange.y[0], max: baryRange.y[1], label: svgSub("y", "B") }}
+            x={{ kind: "linear", min: baryRange.x[0], max: baryRange.x[1], label: svgSub("x", "B"), symbol: "x_B" }}
+            y={{ kind: "linear", min: baryRange.y[0], max: baryRange.y[1], label: svgSub("y", "B"), symbol: "y_B" }}
             equalAspect
             maxWidth={620}
             curves={[{ id: "outline", label: "realizable states: 1C (1, 0), 2C (0, 0), 3C (½, √3/2)", points: outline, style: { color: PLOT_COLOURS.guide, width: 1.6 } }]}
-            markers={[baryVertices, ...sampleSets("barycentric")]}
+            markers={[baryVertices, ...sampleSets("barycentric"), ...highlight("barycentric")]}
+            onPointClick={pick}
           />
         </div>
       </div>
+      <SelectedSample samples={run.stresses} selected={selected} onSelect={select} />
       <StressViolations samples={run.stresses} />
     </Panel>
   );

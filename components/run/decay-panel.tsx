@@ -23,8 +23,8 @@ export function DecayPanel({ run, series }: { run: RunView; series: SeriesView }
     <Panel title="Decay of turbulent kinetic energy" subtitle={plot.shifted ? "k against t − t₀, log–log: a power law is a straight line of slope −n" : "k against t, log–log"}>
       <PlotFrame
         ariaLabel="Turbulent kinetic energy k against t minus t0 on log-log axes with the fitted power law and the band's reference slope"
-        x={{ kind: "log", min: plot.xRange[0], max: plot.xRange[1], label: plot.shifted ? "t − t₀" : "t" }}
-        y={{ kind: "log", min: plot.yRange[0], max: plot.yRange[1], label: "k" }}
+        x={{ kind: "log", min: plot.xRange[0], max: plot.xRange[1], label: plot.shifted ? "t − t₀" : "t", symbol: plot.shifted ? "t − t₀" : "t" }}
+        y={{ kind: "log", min: plot.yRange[0], max: plot.yRange[1], label: "k", symbol: "k" }}
         height={340}
         curves={curves}
         markers={[{ id: "data", label: "k posted by the run", points: plot.data, shape: "circle", hollow: true, size: 5, color: PLOT_COLOURS.data }]}

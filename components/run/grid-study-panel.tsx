@@ -25,8 +25,8 @@ export function GridStudyPanel({ run, study, definitions }: { run: RunView; stud
     <Panel title="Grid convergence" subtitle={`φ = ${def?.label ?? study.quantity} (${study.quantity}) on three grids against h/h₁ (Celik et al. 2008)`} className="lg:col-span-2">
       <PlotFrame
         ariaLabel="Grid study: the studied value against normalised grid spacing with Richardson extrapolation and the fine-grid GCI error bar"
-        x={{ kind: "linear", min: plot.xRange[0], max: plot.xRange[1], label: `h/h₁ (h = N^−1/${study.dimension})` }}
-        y={{ kind: "linear", min: plot.yRange[0], max: plot.yRange[1], label: "φ", exponent: axisExponent(plot.yRange[0], plot.yRange[1]) }}
+        x={{ kind: "linear", min: plot.xRange[0], max: plot.xRange[1], label: `h/h₁ (h = N^−1/${study.dimension})`, symbol: "h/h₁" }}
+        y={{ kind: "linear", min: plot.yRange[0], max: plot.yRange[1], label: "φ", symbol: "φ", exponent: axisExponent(plot.yRange[0], plot.yRange[1]) }}
         height={340}
         rules={plot.reference !== null ? [{ axis: "y", at: plot.reference, style: { color: PLOT_COLOURS.reference, dash: "6 4" }, label: `band reference ${formatSig(plot.reference, 6)}` }] : []}
         curves={plot.curve.length ? [{ id: "richardson", label: `φ_ext + (φ₁ − φ_ext)(h/h₁)^p, p = ${formatSig(study.observedOrder, 4)}`, points: plot.curve, style: { color: PLOT_COLOURS.fit, width: 1.8, dash: "6 3" } }] : []}

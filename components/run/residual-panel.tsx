@@ -25,8 +25,8 @@ export function ResidualPanel({ run, series, caseParameters }: { run: RunView; s
     <Panel title="Residual history" subtitle="steady-solve residual against iteration, logarithmic residual axis">
       <PlotFrame
         ariaLabel="Residual against iteration on a logarithmic axis with the convergence target and the tail trend"
-        x={{ kind: "linear", min: plot.xRange[0], max: plot.xRange[1], label: "iteration" }}
-        y={{ kind: "log", min: plot.yRange[0], max: plot.yRange[1], label: "residual" }}
+        x={{ kind: "linear", min: plot.xRange[0], max: plot.xRange[1], label: "iteration", symbol: "iteration" }}
+        y={{ kind: "log", min: plot.yRange[0], max: plot.yRange[1], label: "residual", symbol: "residual" }}
         height={340}
         bands={bands}
         rules={rules}

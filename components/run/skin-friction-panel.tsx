@@ -53,8 +53,8 @@ export function SkinFrictionPanel({ run, series, caseParameters }: { run: RunVie
     <Panel title="Skin friction" subtitle={plot.mode === "reynolds" ? "c_f against Re_x (log axis) with flat-plate correlations" : plot.mode === "step" ? "c_f along the lower wall behind the step, x in step heights" : "c_f along the wall"}>
       <PlotFrame
         ariaLabel="Skin friction coefficient along the wall"
-        x={{ kind: plot.xLog ? "log" : "linear", min: plot.xRange[0], max: plot.xRange[1], label: xLabel }}
-        y={{ kind: "linear", min: plot.yRange[0], max: plot.yRange[1], label: svgSub("c", "f"), exponent: axisExponent(plot.yRange[0], plot.yRange[1]) }}
+        x={{ kind: plot.xLog ? "log" : "linear", min: plot.xRange[0], max: plot.xRange[1], label: xLabel, symbol: plot.mode === "reynolds" ? "Re_x" : plot.mode === "step" ? "x/H" : "x" }}
+        y={{ kind: "linear", min: plot.yRange[0], max: plot.yRange[1], label: svgSub("c", "f"), symbol: "c_f", exponent: axisExponent(plot.yRange[0], plot.yRange[1]) }}
         height={340}
         bands={bands}
         rules={rules}

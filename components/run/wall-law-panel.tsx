@@ -48,8 +48,8 @@ export function WallLawPanel({ run, series, caseParameters }: { run: RunView; se
         <div className="min-w-0">
           <PlotFrame
             ariaLabel="Mean velocity u+ against y+ with the fitted log law, the band's reference log law, Spalding's composite law and the viscous sublayer"
-            x={{ kind: "log", min: plot.xRange[0], max: plot.xRange[1], label: "y⁺" }}
-            y={{ kind: "linear", min: plot.yRange[0], max: plot.yRange[1], label: "u⁺" }}
+            x={{ kind: "log", min: plot.xRange[0], max: plot.xRange[1], label: "y⁺", symbol: "y⁺" }}
+            y={{ kind: "linear", min: plot.yRange[0], max: plot.yRange[1], label: "u⁺", symbol: "u⁺" }}
             height={400}
             bands={windowBand}
             curves={curves}
@@ -62,8 +62,8 @@ export function WallLawPanel({ run, series, caseParameters }: { run: RunView; se
           <p className="mb-1 text-xs text-ink-faint">A log region shows as a plateau at 1/κ; without a plateau the fitted κ describes no log layer.</p>
           <PlotFrame
             ariaLabel="Diagnostic function Xi against y+ with the 1/kappa plateau lines"
-            x={{ kind: "log", min: xi.xRange[0], max: xi.xRange[1], label: "y⁺" }}
-            y={{ kind: "linear", min: xi.yRange[0], max: xi.yRange[1], label: "Ξ = y⁺ du⁺/dy⁺" }}
+            x={{ kind: "log", min: xi.xRange[0], max: xi.xRange[1], label: "y⁺", symbol: "y⁺" }}
+            y={{ kind: "linear", min: xi.yRange[0], max: xi.yRange[1], label: "Ξ = y⁺ du⁺/dy⁺", symbol: "Ξ" }}
             height={300}
             bands={windowBand.map((b) => ({ ...b, label: undefined }))}
             rules={rules}

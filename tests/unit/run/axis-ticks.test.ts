@@ -8,6 +8,7 @@ import {
   logExtent,
   logMinorTicks,
   logTicks,
+  needsPowersOfTen,
 } from "@/components/charts/axis-ticks";
 
 // Axis conventions of engineering plots (common practice): decades on log
@@ -35,9 +36,9 @@ describe("logTicks", () => {
     expect(logTicks(0.2, 200)).toEqual([1, 10, 100]);
   });
 
-  it("thins decades to at most eight ticks over a long residual history", () => {
+  it("thins decades to at most ten ticks over a long residual history", () => {
     const ticks = logTicks(1e-14, 1e2);
-    expect(ticks.length).toBeLessThanOrEqual(9);
+    expect(ticks.length).toBeLessThanOrEqual(10);
     expect(ticks[0]).toBeCloseTo(1e-14, 26);
   });
 
@@ -73,5 +74,12 @@ describe("linear ticks and labels", () => {
     expect(formatLogTick(0.01)).toBe("0.01");
     expect(formatLogTick(1e5)).toBe("10⁵");
     expect(formatLogTick(2e-5)).toBe("2×10⁻⁵");
+  });
+
+  it("writes every tick of an axis as a power of ten once one of them needs it", () => {
+    const ticks = [1e-7, 1e-5, 1e-3, 0.1, 10];
+    expect(needsPowersOfTen(ticks)).toBe(true);
+    expect(ticks.map((t) => formatLogTick(t, true))).toEqual(["10⁻⁷", "10⁻⁵", "10⁻³", "10⁻¹", "10¹"]);
+    expect(needsPowersOfTen([1, 10, 100])).toBe(false);
   });
 });
