@@ -48,7 +48,7 @@ export const QuantityValue = {
   key: (q: QuantityValueRow) => q.quantity_key,
   label: async (q: QuantityValueRow, _: unknown, ctx: Ctx) => (await definitionOf(q, ctx))?.label ?? null,
   unit: async (q: QuantityValueRow, _: unknown, ctx: Ctx) => (await definitionOf(q, ctx))?.unit ?? null,
-  band: bandOf,
+  band: (q: QuantityValueRow, _: unknown, ctx: Ctx) => bandOf(q, ctx),
   reference: async (q: QuantityValueRow, _: unknown, ctx: Ctx) => (await bandOf(q, ctx))?.reference ?? null,
   source: async (q: QuantityValueRow, _: unknown, ctx: Ctx) => (await bandOf(q, ctx))?.source ?? null,
   lower: async (q: QuantityValueRow, _: unknown, ctx: Ctx) => (await bandOf(q, ctx))?.lower ?? null,
