@@ -55,6 +55,10 @@ const OPERATIONS: Operation[] = [
     ["models", "{ models { key } }"],
     ["quantities", "{ quantities { key } }"],
     ["trend", `{ trend(case: "backstep", quantity: "reattachment_xr_h", model: "sa", branch: "main") { points { value } } }`],
+    ["trendChart", `{ trendChart(case: "backstep", quantity: "reattachment_xr_h", models: ["sa", "sst"], branch: "main", last: 5) { series { model } } }`],
+    ["buildTable", `{ buildTable(first: 2) { totalCount } }`],
+    ["buildComparison", `{ buildComparison(buildId: "2", againstId: "1") { __typename } }`],
+    ["morningView", `{ morningView { __typename } }`],
   ].map(([name, query]) => ({ name, allowed: PEOPLE, run: (c: Caller) => call(c, query) })),
   { name: "releaseGate", allowed: ["ci", ...PEOPLE], run: (c) => call(c, `{ releaseGate(commit: "abcdef1") { state } }`) },
   {
