@@ -18,7 +18,7 @@ export default async function DashboardLayout({ children }: { children: ReactNod
           <Link href="/" className="font-semibold tracking-tight text-tide-700 dark:text-tide-300">
             Tauline
           </Link>
-          <MainNav />
+          <MainNav role={session.user.role} />
           <div className="ml-auto flex items-center gap-3 text-sm">
             <span className="text-ink-soft dark:text-white/70">
               {session.user.name} · <span data-testid="role">{ROLE_LABEL[session.user.role]}</span>
