@@ -1,5 +1,6 @@
 import "server-only";
 import type { Db } from "../index";
+import type { BandRow } from "./library";
 
 // Reads of the case library screens beyond the shared library queries.
 
@@ -40,19 +41,7 @@ export async function getRecentGridsByCase({ db, caseKeys, recentBuilds }: { db:
     .orderBy(["r.case_key", "r.grid"]);
 }
 
-export interface BandRecordRow {
-  id: number;
-  case_key: string;
-  quantity_key: string;
-  model_key: string | null;
-  version: number;
-  kind: "verification" | "validation";
-  reference: number | null;
-  source: string;
-  lower: number | null;
-  upper: number | null;
-  marginal_margin: number;
-  noise_floor: number;
+export interface BandRecordRow extends Omit<BandRow, "fit_settings"> {
   fit_settings: Record<string, unknown> | null;
   author_label: string;
   reason: string;

@@ -48,10 +48,6 @@ export async function getBandsByIds({ db, ids }: { db: Db; ids: readonly number[
   return rows.map(toBand);
 }
 
-export async function getBandHistory({ db, caseKeys }: { db: Db; caseKeys: readonly string[] }) {
-  return db("bands").whereIn("case_key", caseKeys as string[]).orderBy([{ column: "case_key" }, { column: "quantity_key" }, { column: "model_key" }, { column: "version" }]).select("*");
-}
-
 export interface BandRow {
   id: number;
   case_key: string;
