@@ -1,5 +1,6 @@
 import { createSchema } from "graphql-yoga";
 import type { GraphQLContext } from "../context";
+import { adminResolvers } from "../resolvers/admin";
 import { bandMutations } from "../resolvers/bands";
 import { buildsViewResolvers } from "../resolvers/builds-view";
 import { caseLibraryResolvers } from "../resolvers/case-library";
@@ -10,6 +11,7 @@ import { QuantityBandView, RunView } from "../resolvers/run-view";
 import { DateTime, JSONScalar } from "../resolvers/scalars";
 import { trendsResolvers } from "../resolvers/trends";
 import * as types from "../resolvers/types";
+import { adminTypeDefs } from "./admin";
 import { bandsTypeDefs } from "./bands";
 import { baseTypeDefs } from "./base";
 import { buildsTypeDefs } from "./builds";
@@ -22,7 +24,7 @@ import { submissionTypeDefs } from "./submission";
 import { trendsTypeDefs } from "./trends";
 
 export const schema = createSchema<GraphQLContext>({
-  typeDefs: [baseTypeDefs, submissionTypeDefs, buildsTypeDefs, libraryTypeDefs, bandsTypeDefs, buildsViewTypeDefs, overviewTypeDefs, trendsTypeDefs, caseLibraryTypeDefs, runViewTypeDefs],
+  typeDefs: [baseTypeDefs, submissionTypeDefs, buildsTypeDefs, libraryTypeDefs, bandsTypeDefs, buildsViewTypeDefs, overviewTypeDefs, trendsTypeDefs, caseLibraryTypeDefs, runViewTypeDefs, adminTypeDefs],
   // Resolver maps merge field by field (graphql-tools), so screen modules add Query fields and types.
-  resolvers: [{ DateTime, JSON: JSONScalar, Query, Mutation: { ...Mutation, ...bandMutations }, ...types }, overviewResolvers, trendsResolvers, caseLibraryResolvers, buildsViewResolvers, { Run: RunView, QuantityValue: QuantityBandView }],
+  resolvers: [{ DateTime, JSON: JSONScalar, Query, Mutation: { ...Mutation, ...bandMutations }, ...types }, overviewResolvers, trendsResolvers, caseLibraryResolvers, buildsViewResolvers, { Run: RunView, QuantityValue: QuantityBandView }, adminResolvers],
 });
