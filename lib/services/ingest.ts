@@ -11,6 +11,7 @@ import type { BandInForce, FitSettings } from "@/lib/evaluation/types";
 import { AppError, formatPath, type FieldIssue } from "@/lib/errors";
 import { submissionSchema, type ResultSubmission, type RunSubmission } from "@/lib/validation/submission";
 import { actorUserId, type Actor } from "./actor";
+import { recordAlertsForSubmission, sendQueuedAlerts } from "./alerts";
 import { requireSubmitter } from "./authorize";
 
 export interface SubmissionResult {
@@ -49,7 +50,7 @@ export async function submitResults({
   const bands = await getBandsInForce({ db, caseKeys: [...caseByKey.keys()], at: receivedAt });
   const derived = input.runs.map((run) => deriveRunQuantities(run, settingsLookup(run, caseByKey.get(run.case)!, bands)));
 
-  return db.transaction(async (trx) => {
+  const outcome = await db.transaction(async (trx) => {
     const { row: build, created } = await upsertBuildForUpdate({ db: trx, build: input.build, receivedAt });
     if (build.branch !== input.build.branch) {
       throw new AppError("conflict", `Build ${build.commit} was first posted on branch ${build.branch}.`, [
@@ -82,6 +83,7 @@ export async function submitResults({
     }
 
     const verdict = await setBuildVerdict({ db: trx, buildId: build.id });
+    const alerts = await recordAlertsForSubmission(trx, { buildId: build.id, backdated: receivedAt !== undefined });
     await trx("submissions").insert({
       build_id: build.id,
       ci_token_id: actor.kind === "ci" ? actor.tokenId : null,
@@ -101,8 +103,11 @@ export async function submitResults({
         at: receivedAt,
       },
     });
-    return { buildId: build.id, runIds, created };
+    return { result: { buildId: build.id, runIds, created }, outboxIds: alerts.outboxIds };
   });
+  // Only after commit: a delivery job must find the outbox row it names.
+  await sendQueuedAlerts(outcome.outboxIds);
+  return outcome.result;
 }
 
 export function parseSubmission(unsafeInput: unknown): ResultSubmission {

@@ -1,0 +1,48 @@
+import "server-only";
+import PgBoss from "pg-boss";
+import { getEnv } from "@/lib/env";
+import { DELIVER_QUEUE, DELIVER_RETRY, DIGEST_QUEUE, SWEEP_QUEUE } from "./queues";
+
+// One pg-boss per process, on the application's own database in the schema
+// `pgboss` (created and migrated by start(), under an advisory lock, so several
+// app instances can start at once). Kept on globalThis like the Knex pool, so
+// Next's dev reloads do not open a second one.
+
+const globalForJobs = globalThis as unknown as { taulineBoss?: Promise<PgBoss> };
+
+export const BOSS_SCHEMA = "pgboss";
+
+async function startBoss(): Promise<PgBoss> {
+  const boss = new PgBoss({ connectionString: getEnv().DATABASE_URL, schema: BOSS_SCHEMA, max: 4, application_name: "tauline-jobs" });
+  // An error here is a failed poll or maintenance run; pg-boss keeps going and
+  // the outbox keeps the mail, so it is logged and not thrown.
+  boss.on("error", (error) => console.error(`[jobs] ${error.message}`));
+  await boss.start();
+  // 'short': at most one waiting job per outbox row (singleton key); a second
+  // nudge for the same row while one waits is dropped by pg-boss.
+  const deliver = { policy: "short" as const, ...DELIVER_RETRY, expireInSeconds: 180 };
+  await boss.createQueue(DELIVER_QUEUE, { name: DELIVER_QUEUE, ...deliver });
+  await boss.updateQueue(DELIVER_QUEUE, { name: DELIVER_QUEUE, ...deliver });
+  // Sweep and digest: one waiting job at a time is enough.
+  for (const name of [SWEEP_QUEUE, DIGEST_QUEUE]) {
+    await boss.createQueue(name, { name, policy: "short", retryLimit: 2, retryDelay: 30, expireInSeconds: 300 });
+  }
+  return boss;
+}
+
+/** The process's started pg-boss; a failed start is forgotten so the next call tries again. */
+export function getBoss(): Promise<PgBoss> {
+  if (!globalForJobs.taulineBoss) {
+    globalForJobs.taulineBoss = startBoss().catch((error: unknown) => {
+      globalForJobs.taulineBoss = undefined;
+      throw error;
+    });
+  }
+  return globalForJobs.taulineBoss;
+}
+
+export async function stopBoss(): Promise<void> {
+  const pending = globalForJobs.taulineBoss;
+  globalForJobs.taulineBoss = undefined;
+  if (pending) await (await pending).stop({ graceful: true, wait: true });
+}

@@ -1,0 +1,19 @@
+import "server-only";
+import { getBoss } from "./boss";
+import { DELIVER_QUEUE } from "./queues";
+
+/**
+ * Asks the workers to send these outbox rows now. Called after the transaction
+ * that queued them has committed (a job for an uncommitted row would find
+ * nothing). It never throws: if pg-boss cannot be reached the rows stay queued
+ * in the outbox and the minute sweep hands them to a worker later.
+ */
+export async function nudgeMailDelivery(outboxIds: number[]): Promise<void> {
+  if (outboxIds.length === 0) return;
+  try {
+    const boss = await getBoss();
+    for (const id of outboxIds) await boss.send(DELIVER_QUEUE, { outboxId: id }, { singletonKey: `outbox:${id}` });
+  } catch (error) {
+    console.error(`[mail] could not queue delivery of outbox rows ${outboxIds.join(", ")}; the sweep will: ${String(error)}`);
+  }
+}
