@@ -4,6 +4,7 @@ import { adminResolvers } from "../resolvers/admin";
 import { bandMutations } from "../resolvers/bands";
 import { buildsViewResolvers } from "../resolvers/builds-view";
 import { caseLibraryResolvers } from "../resolvers/case-library";
+import { gateResolvers } from "../resolvers/gate";
 import { Mutation } from "../resolvers/mutations";
 import { overviewResolvers } from "../resolvers/overview";
 import { Query } from "../resolvers/queries";
@@ -17,6 +18,7 @@ import { baseTypeDefs } from "./base";
 import { buildsTypeDefs } from "./builds";
 import { buildsViewTypeDefs } from "./builds-view";
 import { caseLibraryTypeDefs } from "./case-library";
+import { gateTypeDefs } from "./gate";
 import { libraryTypeDefs } from "./library";
 import { overviewTypeDefs } from "./overview";
 import { runViewTypeDefs } from "./run-view";
@@ -24,7 +26,7 @@ import { submissionTypeDefs } from "./submission";
 import { trendsTypeDefs } from "./trends";
 
 export const schema = createSchema<GraphQLContext>({
-  typeDefs: [baseTypeDefs, submissionTypeDefs, buildsTypeDefs, libraryTypeDefs, bandsTypeDefs, buildsViewTypeDefs, overviewTypeDefs, trendsTypeDefs, caseLibraryTypeDefs, runViewTypeDefs, adminTypeDefs],
+  typeDefs: [baseTypeDefs, submissionTypeDefs, buildsTypeDefs, libraryTypeDefs, bandsTypeDefs, buildsViewTypeDefs, overviewTypeDefs, trendsTypeDefs, caseLibraryTypeDefs, runViewTypeDefs, gateTypeDefs, adminTypeDefs],
   // Resolver maps merge field by field (graphql-tools), so screen modules add Query fields and types.
-  resolvers: [{ DateTime, JSON: JSONScalar, Query, Mutation: { ...Mutation, ...bandMutations }, ...types }, overviewResolvers, trendsResolvers, caseLibraryResolvers, buildsViewResolvers, { Run: RunView, QuantityValue: QuantityBandView }, adminResolvers],
+  resolvers: [{ DateTime, JSON: JSONScalar, Query, Mutation: { ...Mutation, ...bandMutations }, ...types }, overviewResolvers, trendsResolvers, caseLibraryResolvers, buildsViewResolvers, { Run: RunView, QuantityValue: QuantityBandView }, gateResolvers, adminResolvers],
 });

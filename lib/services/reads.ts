@@ -1,13 +1,12 @@
 import "server-only";
 import { z } from "zod";
 import { getDb } from "@/db";
-import { getBuildByCommit, getBranches, listBuilds } from "@/db/queries/builds";
-import { getLatestDecisionsByBuildIds } from "@/db/queries/gate";
+import { getBranches, listBuilds } from "@/db/queries/builds";
 import { getBandsInForce, getCases, getModels, getQuantityDefinitions } from "@/db/queries/library";
 import { getTrendPoints } from "@/db/queries/quantity-values";
 import { AppError, formatPath } from "@/lib/errors";
 import type { Actor } from "./actor";
-import { requirePerson, requireSignedIn } from "./authorize";
+import { requirePerson } from "./authorize";
 
 // Read services: the same functions serve GraphQL resolvers and server pages.
 
@@ -67,28 +66,8 @@ export async function findTrend({ actor, unsafeInput }: { actor: Actor | null; u
   return { ...t, points };
 }
 
-/** Gate state of a commit for CI: the newest decision, or pending, and what blocks it. */
-export async function findReleaseGate({ actor, commit }: { actor: Actor | null; commit: string }) {
-  requireSignedIn(actor);
-  const c = parse(z.string().trim().regex(/^[0-9a-fA-F]{7,64}$/, "must be a commit hash of 7 to 64 hexadecimal digits"), commit, "commit");
-  const db = getDb();
-  const build = await getBuildByCommit({ db, commit: c });
-  if (!build) return { commit: c.toLowerCase(), build: null, state: "pending" as const, decision: null, blocking: ["no results have been posted for this commit"] };
-  const [decision] = await getLatestDecisionsByBuildIds({ db, buildIds: [build.id] });
-  const blockingRows: { case_key: string; model_key: string; grid: string; quantity_key: string; value: number | null }[] = await db("quantity_values")
-    .where({ build_id: build.id, verdict: "outside" })
-    .select("case_key", "model_key", "grid", "quantity_key", "value")
-    .orderBy(["case_key", "model_key", "quantity_key"]);
-  const failedRuns: { case_key: string; model_key: string; grid: string; status: string }[] = await db("runs")
-    .where({ build_id: build.id })
-    .whereNot({ status: "COMPLETED" })
-    .select("case_key", "model_key", "grid", "status");
-  const blocking = [
-    ...failedRuns.map((r) => `${r.case_key}/${r.model_key}/${r.grid}: run ${r.status.toLowerCase()}`),
-    ...blockingRows.map((r) => `${r.case_key}/${r.model_key}/${r.grid}: ${r.quantity_key} = ${r.value ?? "no value"} is outside its band`),
-  ];
-  return { commit: build.commit, build, state: decision?.state ?? ("pending" as const), decision: decision ?? null, blocking };
-}
+// The gate state for CI lives with the rest of the release gate.
+export { findReleaseGate } from "./gate-ci";
 
 function parse<T>(schema: z.ZodType<T>, unsafeInput: unknown, prefix = ""): T {
   const r = schema.safeParse(unsafeInput);
