@@ -8,7 +8,7 @@ export default withAuth({
 });
 
 export const config = {
-  // Everything but sign-in, the auth and GraphQL endpoints (they answer 401 themselves),
-  // health, and static files.
-  matcher: ["/((?!sign-in|api/auth|api/graphql|api/health|_next/static|_next/image|favicon.ico).*)"],
+  // Everything but sign-in, the set-password links (the link is the proof), the auth and
+  // GraphQL endpoints (they answer 401 themselves), health, and static files.
+  matcher: ["/((?!sign-in|invite/|api/auth|api/graphql|api/health|_next/static|_next/image|favicon.ico).*)"],
 };
