@@ -5,6 +5,7 @@ import { bandMutations } from "../resolvers/bands";
 import { buildsViewResolvers } from "../resolvers/builds-view";
 import { caseLibraryResolvers } from "../resolvers/case-library";
 import { gateResolvers } from "../resolvers/gate";
+import { libraryEditResolvers } from "../resolvers/library-edit";
 import { Mutation } from "../resolvers/mutations";
 import { overviewResolvers } from "../resolvers/overview";
 import { Query } from "../resolvers/queries";
@@ -20,13 +21,14 @@ import { buildsViewTypeDefs } from "./builds-view";
 import { caseLibraryTypeDefs } from "./case-library";
 import { gateTypeDefs } from "./gate";
 import { libraryTypeDefs } from "./library";
+import { libraryEditTypeDefs } from "./library-edit";
 import { overviewTypeDefs } from "./overview";
 import { runViewTypeDefs } from "./run-view";
 import { submissionTypeDefs } from "./submission";
 import { trendsTypeDefs } from "./trends";
 
 export const schema = createSchema<GraphQLContext>({
-  typeDefs: [baseTypeDefs, submissionTypeDefs, buildsTypeDefs, libraryTypeDefs, bandsTypeDefs, buildsViewTypeDefs, overviewTypeDefs, trendsTypeDefs, caseLibraryTypeDefs, runViewTypeDefs, gateTypeDefs, adminTypeDefs],
+  typeDefs: [baseTypeDefs, submissionTypeDefs, buildsTypeDefs, libraryTypeDefs, bandsTypeDefs, buildsViewTypeDefs, overviewTypeDefs, trendsTypeDefs, caseLibraryTypeDefs, runViewTypeDefs, gateTypeDefs, adminTypeDefs, libraryEditTypeDefs],
   // Resolver maps merge field by field (graphql-tools), so screen modules add Query fields and types.
-  resolvers: [{ DateTime, JSON: JSONScalar, Query, Mutation: { ...Mutation, ...bandMutations }, ...types }, overviewResolvers, trendsResolvers, caseLibraryResolvers, buildsViewResolvers, { Run: RunView, QuantityValue: QuantityBandView }, gateResolvers, adminResolvers],
+  resolvers: [{ DateTime, JSON: JSONScalar, Query, Mutation: { ...Mutation, ...bandMutations }, ...types }, overviewResolvers, trendsResolvers, caseLibraryResolvers, buildsViewResolvers, { Run: RunView, QuantityValue: QuantityBandView }, gateResolvers, adminResolvers, libraryEditResolvers],
 });
