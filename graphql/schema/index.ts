@@ -1,6 +1,7 @@
 import { createSchema } from "graphql-yoga";
 import type { GraphQLContext } from "../context";
 import { adminResolvers } from "../resolvers/admin";
+import { alertsResolvers } from "../resolvers/alerts";
 import { bandMutations } from "../resolvers/bands";
 import { buildsViewResolvers } from "../resolvers/builds-view";
 import { caseLibraryResolvers } from "../resolvers/case-library";
@@ -14,6 +15,7 @@ import { DateTime, JSONScalar } from "../resolvers/scalars";
 import { trendsResolvers } from "../resolvers/trends";
 import * as types from "../resolvers/types";
 import { adminTypeDefs } from "./admin";
+import { alertsTypeDefs } from "./alerts";
 import { bandsTypeDefs } from "./bands";
 import { baseTypeDefs } from "./base";
 import { buildsTypeDefs } from "./builds";
@@ -28,7 +30,7 @@ import { submissionTypeDefs } from "./submission";
 import { trendsTypeDefs } from "./trends";
 
 export const schema = createSchema<GraphQLContext>({
-  typeDefs: [baseTypeDefs, submissionTypeDefs, buildsTypeDefs, libraryTypeDefs, bandsTypeDefs, buildsViewTypeDefs, overviewTypeDefs, trendsTypeDefs, caseLibraryTypeDefs, runViewTypeDefs, gateTypeDefs, adminTypeDefs, libraryEditTypeDefs],
+  typeDefs: [baseTypeDefs, submissionTypeDefs, buildsTypeDefs, libraryTypeDefs, bandsTypeDefs, buildsViewTypeDefs, overviewTypeDefs, trendsTypeDefs, caseLibraryTypeDefs, runViewTypeDefs, gateTypeDefs, adminTypeDefs, libraryEditTypeDefs, alertsTypeDefs],
   // Resolver maps merge field by field (graphql-tools), so screen modules add Query fields and types.
-  resolvers: [{ DateTime, JSON: JSONScalar, Query, Mutation: { ...Mutation, ...bandMutations }, ...types }, overviewResolvers, trendsResolvers, caseLibraryResolvers, buildsViewResolvers, { Run: RunView, QuantityValue: QuantityBandView }, gateResolvers, adminResolvers, libraryEditResolvers],
+  resolvers: [{ DateTime, JSON: JSONScalar, Query, Mutation: { ...Mutation, ...bandMutations }, ...types }, overviewResolvers, trendsResolvers, caseLibraryResolvers, buildsViewResolvers, { Run: RunView, QuantityValue: QuantityBandView }, gateResolvers, adminResolvers, libraryEditResolvers, alertsResolvers],
 });
