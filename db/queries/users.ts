@@ -110,8 +110,9 @@ export interface InviteRow {
   used_at: Date | null;
 }
 
-export async function insertInvite({ db, userId, tokenHash, createdBy, expiresAt }: { db: Db; userId: number; tokenHash: string; createdBy: number | null; expiresAt: Date }) {
-  await db("user_invites").insert({ user_id: userId, token_hash: tokenHash, created_by: createdBy, expires_at: expiresAt });
+export async function insertInvite({ db, userId, tokenHash, createdBy, expiresAt }: { db: Db; userId: number; tokenHash: string; createdBy: number | null; expiresAt: Date }): Promise<number> {
+  const [row] = await db("user_invites").insert({ user_id: userId, token_hash: tokenHash, created_by: createdBy, expires_at: expiresAt }).returning("id");
+  return row.id;
 }
 
 /** Closes every open link of a person (a new link replaces them; a deactivation voids them). */

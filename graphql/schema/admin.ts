@@ -34,6 +34,8 @@ export const adminTypeDefs = /* GraphQL */ `
     account: UserAccount!
     url: String!
     expiresAt: DateTime!
+    "The account's address, to which the link was also mailed (through the outbox)."
+    mailedTo: String!
   }
 
   enum CiTokenStatus {

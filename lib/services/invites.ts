@@ -15,11 +15,13 @@ import {
   type AccountRow,
 } from "@/db/queries/users";
 import { getEnv } from "@/lib/env";
+import { nudgeMailDelivery } from "@/lib/jobs/nudge";
 import { AppError } from "@/lib/errors";
 import { acceptInviteSchema, idSchema, INVITE_TOKEN_PATTERN, inviteUserSchema } from "@/lib/validation/users";
 import { actorUserId, type Actor } from "./actor";
 import { requirePerson } from "./authorize";
 import { parseInput } from "./builds-view";
+import { queuePasswordLinkMail } from "./invite-mail";
 import { auditAccount, emailTaken, hashPassword, hashUnusablePassword, requireAccount, toAccount, type Account } from "./users";
 
 // A set-password link is good for a week: long enough to survive a weekend,
@@ -31,20 +33,33 @@ export interface PasswordLink {
   /** Shown to the admin once; only its SHA-256 is stored. */
   url: string;
   expiresAt: Date;
+  /** The address the link was also mailed to (through the outbox). */
+  mailedTo: string;
 }
 
 function hashSecret(secret: string): string {
   return createHash("sha256").update(secret, "utf8").digest("hex");
 }
 
-async function issueLink(db: Db, actor: Actor, account: AccountRow): Promise<{ url: string; expiresAt: Date }> {
+type IssuedLink = { url: string; expiresAt: Date; mailedTo: string; outboxId: number | null };
+
+async function issueLink(db: Db, actor: Actor, account: AccountRow, purpose: "invite" | "reset"): Promise<IssuedLink> {
   const secret = randomBytes(32).toString("base64url");
   const now = new Date();
   const expiresAt = new Date(now.getTime() + INVITE_LIFETIME_MS);
   // One open link per person: a new link voids the older ones.
   await expireOpenInvites({ db, userId: account.id, at: now });
-  await insertInvite({ db, userId: account.id, tokenHash: hashSecret(secret), createdBy: actorUserId(actor), expiresAt });
-  return { url: `${getEnv().APP_URL.replace(/\/$/, "")}/invite/${secret}`, expiresAt };
+  const inviteId = await insertInvite({ db, userId: account.id, tokenHash: hashSecret(secret), createdBy: actorUserId(actor), expiresAt });
+  const url = `${getEnv().APP_URL.replace(/\/$/, "")}/invite/${secret}`;
+  const sender = actorUserId(actor) === null ? null : await getAccountById({ db, id: actorUserId(actor)! });
+  const outboxId = await queuePasswordLinkMail(db, { inviteId, purpose, to: account, from: sender?.name ?? "A Tauline administrator", url, expiresAt });
+  return { url, expiresAt, mailedTo: account.email, outboxId };
+}
+
+/** Sends the queued mail once the transaction that queued it has committed. */
+async function afterCommit(link: IssuedLink & { account: Account }): Promise<PasswordLink> {
+  if (link.outboxId !== null) await nudgeMailDelivery([link.outboxId]);
+  return { account: link.account, url: link.url, expiresAt: link.expiresAt, mailedTo: link.mailedTo };
 }
 
 /** Creates an account that cannot sign in until its owner sets a password through the link. */
@@ -52,15 +67,16 @@ export async function inviteUser({ actor, unsafeInput }: { actor: Actor | null; 
   requirePerson(actor, "admin");
   const input = parseInput(inviteUserSchema, unsafeInput, "input");
   const placeholder = await hashUnusablePassword();
-  return getDb().transaction(async (trx) => {
+  const issued = await getDb().transaction(async (trx) => {
     await lockAccountChanges({ db: trx });
     const id = await insertAccount({ db: trx, account: { email: input.email, name: input.name, role: input.role, passwordHash: placeholder, active: false } });
     if (!id) throw emailTaken(input.email);
     const created = await requireAccount(trx, id);
-    const link = await issueLink(trx, actor, created);
+    const link = await issueLink(trx, actor, created, "invite");
     await auditAccount(trx, actor, "user.invited", created, { name: created.name, role: created.role, linkExpiresAt: link.expiresAt.toISOString() });
     return { account: toAccount(await requireAccount(trx, id)), ...link };
   });
+  return afterCommit(issued);
 }
 
 /**
@@ -71,14 +87,15 @@ export async function inviteUser({ actor, unsafeInput }: { actor: Actor | null; 
 export async function issuePasswordLink({ actor, unsafeUserId }: { actor: Actor | null; unsafeUserId: unknown }): Promise<PasswordLink> {
   requirePerson(actor, "admin");
   const id = parseInput(idSchema, unsafeUserId, "userId");
-  return getDb().transaction(async (trx) => {
+  const issued = await getDb().transaction(async (trx) => {
     await lockAccountChanges({ db: trx });
     const account = await requireAccount(trx, id);
     if (account.status === "deactivated") throw new AppError("conflict", `${account.email} is deactivated; reactivate the account first.`);
-    const link = await issueLink(trx, actor, account);
+    const link = await issueLink(trx, actor, account, account.status === "invited" ? "invite" : "reset");
     await auditAccount(trx, actor, "user.password_link_issued", account, { status: account.status, linkExpiresAt: link.expiresAt.toISOString() });
     return { account: toAccount(await requireAccount(trx, id)), ...link };
   });
+  return afterCommit(issued);
 }
 
 export type LinkState = { state: "open"; name: string; email: string; expiresAt: Date } | { state: "used" | "expired" | "unknown" };

@@ -1,4 +1,7 @@
 import { createHash } from "node:crypto";
+import { readdir, readFile } from "node:fs/promises";
+import { join } from "node:path";
+import { simpleParser } from "mailparser";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeTestDb, testDb } from "../helpers/db";
 import { SUBMIT, postGraphQL, randomCommit } from "../helpers/graphql";
@@ -25,6 +28,7 @@ afterAll(async () => {
   const tokens = await db("ci_tokens").where("name", "like", `${TAG}%`).pluck("id");
   await db("audit_log").where({ entity: "user" }).whereIn("entity_id", users.map(String)).delete();
   await db("audit_log").where({ entity: "ci_token" }).whereIn("entity_id", tokens.map(String)).delete();
+  await db("mail_outbox").where({ kind: "invite" }).whereRaw("recipients[1] like ?", [`${TAG}-%`]).delete();
   await db("ci_tokens").whereIn("id", tokens).delete();
   await db("users").whereIn("id", users).delete();
   await closeTestDb();
@@ -162,6 +166,30 @@ describe("people", () => {
   });
 });
 
+/** The link goes out once through the outbox to the account's own address; with the test stack's SMTP fake, as a real message. */
+async function expectLinkMailed(to: string, url: string) {
+  const rows = await testDb()("mail_outbox").where({ kind: "invite" }).whereRaw("? = any(recipients)", [to]);
+  expect(rows).toHaveLength(1);
+  expect(rows[0].recipients).toEqual([to]);
+  expect(rows[0].text_body).toContain(url);
+  const dir = process.env.MAIL_DIR;
+  if (!dir) return; // the shared dev server may have no SMTP fake listening; the outbox row is the contract
+  const deadline = Date.now() + 30_000;
+  while (Date.now() < deadline) {
+    for (const name of (await readdir(dir).catch(() => [] as string[])).filter((n) => n.endsWith(".eml"))) {
+      const mail = await simpleParser(await readFile(join(dir, name)));
+      const address = (Array.isArray(mail.to) ? mail.to[0] : mail.to)?.value[0]?.address;
+      if (address === to) {
+        expect(mail.text).toContain(url);
+        expect(mail.html || "").toContain(url);
+        return;
+      }
+    }
+    await new Promise((r) => setTimeout(r, 200));
+  }
+  throw new Error(`no set-password mail to ${to} in ${dir}`);
+}
+
 describe("invitations", () => {
   it("invites a person who cannot sign in until they set a password through the link, which then works only once", async () => {
     const res = await gql<{ inviteUser: { url: string; expiresAt: string; account: { id: string; status: string } } }>(
@@ -175,6 +203,7 @@ describe("invitations", () => {
     const token = invite.url.split("/invite/")[1];
     expect(token).toMatch(/^[A-Za-z0-9_-]{43}$/);
     expect(await testDb()("user_invites").where({ token_hash: createHash("sha256").update(token).digest("hex") }).first()).toBeDefined();
+    await expectLinkMailed(email("invited"), invite.url);
 
     const page = await fetch(`${requireEnv("TAULINE_TEST_URL")}/invite/${token}`);
     expect(page.status).toBe(200);
