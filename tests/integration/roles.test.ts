@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeTestDb, testDb } from "../helpers/db";
 import { SUBMIT, ciToken, postGraphQL, randomCommit } from "../helpers/graphql";
 import { signIn } from "../helpers/session";
+import { DECIDE, GRANT, REVOKE, postStepBuild, stepWaiver } from "./gate-helpers";
 
 // The role matrix (DESIGN.md "Who uses it"): every query and mutation, for every
 // kind of caller. Enforced on the server: a refused call is an error with a code
@@ -71,6 +72,17 @@ const OPERATIONS: Operation[] = [
     allowed: ["qa", "admin"],
     run: (c) => call(c, "mutation($input: BandRevisionInput!) { reviseBand(input: $input) { id version } }", { input: bandInput(`role matrix check by ${c}`) }),
   },
+  // Release gate: every person reads it; only the release manager (and admin) decides and waives.
+  { name: "gateCandidates", allowed: PEOPLE, run: (c) => call(c, "{ gateCandidates(first: 2) { totalCount } }") },
+  { name: "gateReview", allowed: PEOPLE, run: (c) => call(c, `{ gateReview(buildId: "1") { id state } }`) },
+  { name: "waivers", allowed: PEOPLE, run: (c) => call(c, "{ waivers { id } }") },
+  {
+    name: "decideGate",
+    allowed: ["release", "admin"],
+    run: async (c) => call(c, DECIDE, { input: { buildId: await gateTargetBuild(), state: "held", comment: `role matrix check by ${c}` } }),
+  },
+  { name: "grantWaiver", allowed: ["release", "admin"], run: (c) => call(c, GRANT, { input: stepWaiver("test/roles", { reason: `role matrix check by ${c}` }) }) },
+  { name: "revokeWaiver", allowed: ["release", "admin"], run: async (c) => call(c, REVOKE, { id: await freshWaiverId(), reason: `role matrix check by ${c}` }) },
 ];
 
 describe("role matrix", () => {
@@ -130,3 +142,19 @@ describe("reviseBand", () => {
     expect(paths).toEqual(expect.arrayContaining(["input.upper", "input.reason"]));
   });
 });
+
+// Targets of the gate mutations: a build on the roles branch (a held decision on
+// it sets no baseline) and a waiver scoped to that branch, so the demo is untouched.
+let gateTarget: Promise<string> | undefined;
+function gateTargetBuild(): Promise<string> {
+  gateTarget ??= postStepBuild({ branch: "test/roles" }).then((b) => b.id);
+  return gateTarget;
+}
+
+async function freshWaiverId(): Promise<string> {
+  const grantor = await testDb()("users").where({ email: "release@fenwick-hydro.test" }).first("id");
+  const [{ id }] = await testDb()("waivers")
+    .insert({ case_key: "backstep", quantity_key: "reattachment_xr_h", model_key: "sa", branch: "test/roles", reason: "role matrix waiver to withdraw", granted_by: grantor.id, expires_at: new Date(Date.now() + 86_400_000) })
+    .returning("id");
+  return String(id);
+}
