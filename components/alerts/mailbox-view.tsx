@@ -49,9 +49,9 @@ export function MailboxView() {
                     aria-current={selected === m.name ? "true" : undefined}
                     className={`block w-full px-2 py-1.5 text-left hover:bg-ink/5 dark:hover:bg-white/10 ${selected === m.name ? "bg-tide-50 dark:bg-tide-900/40" : ""}`}
                   >
-                    <span className="block truncate font-medium">{m.subject}</span>
+                    <span className="line-clamp-2 block font-medium">{m.subject}</span>
                     <span className="block truncate text-xs text-ink-faint">
-                      <span className="tabular-nums">{stamp.format(new Date(m.date ?? m.storedAt))}</span> · {m.from.replace(/\s*<.*>$/, "")} → {m.envelopeTo.join(", ") || m.to.join(", ")}
+                      <span className="tabular-nums">{stamp.format(new Date(m.date ?? m.storedAt))}</span> → {m.envelopeTo.join(", ") || m.to.join(", ")}
                     </span>
                   </button>
                 </li>
