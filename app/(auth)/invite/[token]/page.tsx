@@ -4,6 +4,10 @@ import { SetPasswordForm } from "@/components/admin/set-password-form";
 import { formatUtc } from "@/components/builds/format-time";
 import { describePasswordLink } from "@/lib/services/invites";
 
+// Rendered per request: the link's state (open, used, expired) changes, and a
+// cached "open" page would offer a form for a link that no longer works.
+export const dynamic = "force-dynamic";
+
 // The secret sits in the path: keep it out of Referer headers and search indexes.
 export const metadata: Metadata = { title: "Set your password · Tauline", referrer: "no-referrer", robots: { index: false, follow: false } };
 
@@ -20,7 +24,7 @@ export default async function SetPasswordPage({ params }: { params: Promise<{ to
     <section className="mx-auto mt-16 max-w-sm">
       {link.state === "open" ? (
         <>
-          <h1 className="text-2xl font-semibold tracking-tight">Set your password</h1>
+          <h1 className="text-2xl font-semibold tracking-tight">Set your Tauline password</h1>
           <p className="mt-2 text-sm text-ink-soft dark:text-white/60">
             For <span className="font-medium text-ink dark:text-white">{link.name}</span> ({link.email}). The link works once, until {formatUtc(link.expiresAt)}.
           </p>
