@@ -48,6 +48,9 @@ npm run --silent db:seed
 
 : >"$RUN_DIR/test-smtp.log"
 start_smtp_fake "$smtp_pid_file" "$RUN_DIR/test-smtp.log"
+# The mail tests stop and restart the fake (tests/helpers/smtp-fake.ts) and
+# write the new pid here, so the clean-up above still stops it.
+export TAULINE_SMTP_PID_FILE="$smtp_pid_file"
 build_web
 : >"$RUN_DIR/test-web.log"
 start_web "$web_pid_file" "$RUN_DIR/test-web.log"
