@@ -22,9 +22,11 @@ afterAll(closeTestDb);
 /** Runs the script as `tsx scripts/gate.ts` (what `npm run gate` runs), or through npm itself with `viaNpm`. */
 function runGate(args: string[], env: Record<string, string | undefined> = {}, viaNpm = false): Promise<{ code: number | null; stdout: string; stderr: string }> {
   return new Promise((resolve, reject) => {
-    const [command, prefix] = viaNpm ? ["npm", ["run", "--silent", "gate", "--"]] : [process.execPath, ["--import", "tsx", "scripts/gate.ts"]];
+    const command = viaNpm ? "npm" : process.execPath;
+    const prefix = viaNpm ? ["run", "--silent", "gate", "--"] : ["--import", "tsx", "scripts/gate.ts"];
     const child = spawn(command, [...prefix, ...args], {
-      env: { PATH: process.env.PATH, HOME: process.env.HOME, ...env },
+      // The test runner's environment without its CI token: each test says where the token comes from.
+      env: { ...process.env, TAULINE_CI_TOKEN: undefined, ...env },
       stdio: ["ignore", "pipe", "pipe"],
     });
     let stdout = "";
