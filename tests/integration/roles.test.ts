@@ -3,6 +3,7 @@ import { closeTestDb, testDb } from "../helpers/db";
 import { SUBMIT, ciToken, postGraphQL, randomCommit } from "../helpers/graphql";
 import { signIn } from "../helpers/session";
 import { DECIDE, GRANT, REVOKE, postStepBuild, stepWaiver } from "./gate-helpers";
+import { alertOperations } from "./alerts-roles";
 
 // The role matrix (DESIGN.md "Who uses it"): every query and mutation, for every
 // kind of caller. Enforced on the server: a refused call is an error with a code
@@ -83,6 +84,7 @@ const OPERATIONS: Operation[] = [
   },
   { name: "grantWaiver", allowed: ["release", "admin"], run: (c) => call(c, GRANT, { input: stepWaiver("test/roles", { reason: `role matrix check by ${c}` }) }) },
   { name: "revokeWaiver", allowed: ["release", "admin"], run: async (c) => call(c, REVOKE, { id: await freshWaiverId(), reason: `role matrix check by ${c}` }) },
+  ...alertOperations(call),
 ];
 
 describe("role matrix", () => {
