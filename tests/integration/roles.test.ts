@@ -1,3 +1,5 @@
+import { createHash, randomBytes } from "node:crypto";
+import bcrypt from "bcryptjs";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeTestDb, testDb } from "../helpers/db";
 import { SUBMIT, ciToken, postGraphQL, randomCommit } from "../helpers/graphql";
@@ -84,6 +86,33 @@ const OPERATIONS: Operation[] = [
   },
   { name: "grantWaiver", allowed: ["release", "admin"], run: (c) => call(c, GRANT, { input: stepWaiver("test/roles", { reason: `role matrix check by ${c}` }) }) },
   { name: "revokeWaiver", allowed: ["release", "admin"], run: async (c) => call(c, REVOKE, { id: await freshWaiverId(), reason: `role matrix check by ${c}` }) },
+  // Administration: people, roles and CI tokens belong to the administrator; a set-password link works for whoever holds it.
+  ...[
+    ["userAccounts", "{ userAccounts { id } }"],
+    ["ciTokens", "{ ciTokens { id } }"],
+    ["accountChanges", "{ accountChanges(last: 5) { id } }"],
+  ].map(([name, query]) => ({ name, allowed: ["admin"] as Caller[], run: (c: Caller) => call(c, query) })),
+  {
+    name: "createUser",
+    allowed: ["admin"],
+    run: (c) => call(c, "mutation($input: NewUserInput!) { createUser(input: $input) { id } }", { input: { ...matrixPerson(`new-${c}`), role: "developer", password: "role-matrix-pw-1" } }),
+  },
+  { name: "inviteUser", allowed: ["admin"], run: (c) => call(c, "mutation($input: InviteInput!) { inviteUser(input: $input) { expiresAt } }", { input: { ...matrixPerson(`invite-${c}`), role: "qa" } }) },
+  { name: "issuePasswordLink", allowed: ["admin"], run: async (c) => call(c, "mutation($id: ID!) { issuePasswordLink(userId: $id) { expiresAt } }", { id: await matrixAccount(`link-${c}`) }) },
+  { name: "setUserRole", allowed: ["admin"], run: async (c) => call(c, "mutation($id: ID!) { setUserRole(userId: $id, role: qa) { role } }", { id: await matrixAccount(`role-${c}`) }) },
+  { name: "deactivateUser", allowed: ["admin"], run: async (c) => call(c, "mutation($id: ID!) { deactivateUser(userId: $id) { status } }", { id: await matrixAccount(`off-${c}`) }) },
+  { name: "reactivateUser", allowed: ["admin"], run: async (c) => call(c, "mutation($id: ID!) { reactivateUser(userId: $id) { status } }", { id: await matrixAccount(`on-${c}`, { deactivated: true }) }) },
+  {
+    name: "createCiToken",
+    allowed: ["admin"],
+    run: (c) => call(c, "mutation($input: CiTokenInput!) { createCiToken(input: $input) { token { id } } }", { input: { name: `${MATRIX} ${c}`, expiresAt: new Date(Date.now() + 3_600_000).toISOString() } }),
+  },
+  { name: "revokeCiToken", allowed: ["admin"], run: async (c) => call(c, "mutation($id: ID!) { revokeCiToken(id: $id) { status } }", { id: await matrixToken(c) }) },
+  {
+    name: "setPasswordWithLink",
+    allowed: CALLERS,
+    run: async (c) => call(c, "mutation($input: SetPasswordInput!) { setPasswordWithLink(input: $input) { email } }", { input: { token: await matrixLink(c), password: "role-matrix-pw-1" } }),
+  },
   ...alertOperations(call),
 ];
 
@@ -160,3 +189,39 @@ async function freshWaiverId(): Promise<string> {
     .returning("id");
   return String(id);
 }
+
+// Targets of the administration mutations: throwaway accounts and tokens made
+// straight in the database, so a refusal that failed would hit nobody real.
+// They are removed after the file (this hook runs before the one closing the pool).
+const MATRIX = `roles-matrix-${Date.now().toString(36)}`;
+const matrixPerson = (what: string) => ({ name: `Matrix ${what}`, email: `${MATRIX}-${what}@fenwick-hydro.test` });
+
+async function matrixAccount(what: string, { deactivated = false, active }: { deactivated?: boolean; active?: boolean } = {}): Promise<string> {
+  const [{ id }] = await testDb()("users")
+    .insert({ ...matrixPerson(what), role: "developer", password_hash: bcrypt.hashSync(randomBytes(16).toString("hex"), 4), active: active ?? !deactivated, deactivated_at: deactivated ? new Date() : null })
+    .returning("id");
+  return String(id);
+}
+
+async function matrixToken(caller: Caller): Promise<string> {
+  const [{ id }] = await testDb()("ci_tokens").insert({ name: `${MATRIX} revoke ${caller}`, token_hash: createHash("sha256").update(randomBytes(32)).digest("hex") }).returning("id");
+  return String(id);
+}
+
+async function matrixLink(caller: Caller): Promise<string> {
+  const secret = randomBytes(32).toString("base64url");
+  const userId = await matrixAccount(`link-holder-${caller}`, { active: false });
+  await testDb()("user_invites").insert({ user_id: userId, token_hash: createHash("sha256").update(secret).digest("hex"), expires_at: new Date(Date.now() + 3_600_000) });
+  return secret;
+}
+
+afterAll(async () => {
+  const db = testDb();
+  const users = await db("users").where("email", "like", `${MATRIX}-%`).pluck("id");
+  const tokens = await db("ci_tokens").where("name", "like", `${MATRIX} %`).pluck("id");
+  await db("audit_log").where({ entity: "user" }).whereIn("entity_id", users.map(String)).delete();
+  await db("audit_log").where({ entity: "ci_token" }).whereIn("entity_id", tokens.map(String)).delete();
+  await db("mail_outbox").where({ kind: "invite" }).whereRaw("recipients[1] like ?", [`${MATRIX}-%`]).delete();
+  await db("ci_tokens").whereIn("id", tokens).delete();
+  await db("users").whereIn("id", users).delete();
+});
