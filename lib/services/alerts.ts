@@ -46,8 +46,11 @@ export async function sendQueuedAlerts(outboxIds: number[]): Promise<void> {
 }
 
 async function readAlertFacts(db: Db, buildId: number): Promise<AlertFacts | null> {
-  const [build, quantities, runs] = await Promise.all([getAlertBuild({ db, buildId }), getAlertQuantities({ db, buildId }), getIncompleteRuns({ db, buildId })]);
+  // One after the other: inside the submission's transaction they share one connection.
+  const build = await getAlertBuild({ db, buildId });
   if (!build) return null;
+  const quantities = await getAlertQuantities({ db, buildId });
+  const runs = await getIncompleteRuns({ db, buildId });
   const where = (q: { run_id: number; case_key: string; model_key: string; grid: string }) => ({ runId: q.run_id, caseKey: q.case_key, model: q.model_key, grid: q.grid });
   const named = (q: AlertQuantityRow) => ({ ...where(q), quantity: q.quantity_key, label: q.label, unit: q.unit, value: q.value });
   return {
