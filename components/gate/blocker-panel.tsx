@@ -32,7 +32,8 @@ export function BlockerPanel({ build, blockers, waived, mayDecide }: { build: Ga
           {blockers.map((f) => (
             <li key={f.id} className="py-2.5" data-blocker={`${f.case}/${f.model}/${f.quantity ?? "run"}`}>
               <ItemLine buildId={build.id} f={f} />
-              <p className="mt-1 text-sm text-verdict-outside">{f.blockReason}</p>
+              {/* Value and band are on the line above; the reason adds to them only for a run that did not complete. */}
+              {f.runStatus !== "COMPLETED" && <p className="mt-1 text-sm text-verdict-outside">{f.blockReason}</p>}
               {mayDecide && f.quantity !== null && (
                 <div className="mt-1.5">
                   {open === f.id ? (
@@ -57,7 +58,7 @@ export function BlockerPanel({ build, blockers, waived, mayDecide }: { build: Ga
               <li key={f.id} className="py-2">
                 <ItemLine buildId={build.id} f={f} />
                 <p className="mt-1 text-xs text-ink-soft dark:text-white/70">
-                  {f.blockReason}. Waiver #{f.waiver?.id} by {f.waiver?.grantedBy}, until {f.waiver ? formatUntil(f.waiver.expiresAt) : "—"}: “{f.waiver?.reason}”
+                  {f.runStatus !== "COMPLETED" && `${f.blockReason}. `}Waiver #{f.waiver?.id} by {f.waiver?.grantedBy}, counts through {f.waiver ? formatUntil(f.waiver.expiresAt) : "—"}: “{f.waiver?.reason}”
                 </p>
               </li>
             ))}

@@ -12,7 +12,7 @@ import { CandidateRow } from "./candidate-row";
 const PAGE_SIZES = [20, 50, 100] as const;
 
 /** Release candidates: the ones waiting for a decision first, then the rest newest first (?branch=&page=&size=). */
-export function CandidateList() {
+export function CandidateList({ mayDecide }: { mayDecide: boolean }) {
   const { params, update } = useQueryParams();
   const branch = params.get("branch") || null;
   const size = PAGE_SIZES.find((s) => String(s) === params.get("size")) ?? PAGE_SIZES[0];
@@ -71,7 +71,7 @@ export function CandidateList() {
                     {(i === 0 || result.items[i - 1].awaiting !== c.awaiting) && (
                       <GroupRow text={c.awaiting ? "Waiting for a decision" : "Decided, or settled by a later decision on their branch"} />
                     )}
-                    <CandidateRow candidate={c} />
+                    <CandidateRow candidate={c} mayDecide={mayDecide} />
                   </Fragment>
                 ))}
               </tbody>

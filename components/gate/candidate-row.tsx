@@ -5,7 +5,7 @@ import type { GateCandidateItem } from "@/graphql/operations/gate";
 import { formatDayTime } from "./gate-format";
 
 /** One candidate: what it is, how it fared, what blocks approval, and its gate state. */
-export function CandidateRow({ candidate: c }: { candidate: GateCandidateItem }) {
+export function CandidateRow({ candidate: c, mayDecide }: { candidate: GateCandidateItem; mayDecide: boolean }) {
   const href = `/gate/${c.build.id}`;
   return (
     <tr data-candidate={c.build.id} className={`border-b border-ink/5 align-top dark:border-white/10 ${c.awaiting ? "" : "text-ink-soft dark:text-white/70"}`}>
@@ -33,7 +33,7 @@ export function CandidateRow({ candidate: c }: { candidate: GateCandidateItem })
       </td>
       <td className="py-2 text-right">
         <Link href={href} className="text-sm whitespace-nowrap text-tide-700 hover:underline dark:text-tide-300">
-          {c.awaiting ? "Review and decide →" : "Review →"}
+          {c.awaiting && mayDecide ? "Review and decide →" : "Review →"}
         </Link>
       </td>
     </tr>

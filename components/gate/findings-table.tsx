@@ -1,6 +1,6 @@
 import Link from "next/link";
 import { trendHref } from "@/components/overview/links";
-import { formatDifference, formatValue } from "@/components/quantities/format-value";
+import { formatDifference, formatDifferencePct, formatValue } from "@/components/quantities/format-value";
 import { Panel } from "@/components/ui/panel";
 import { EmptyState } from "@/components/ui/states";
 import { VerdictBadge } from "@/components/ui/verdict-badge";
@@ -53,7 +53,7 @@ export function FindingsTable({ buildId, branch, findings }: { buildId: string; 
                     )}
                   </td>
                   <td className="py-2 pr-3 text-right">
-                    <div className="font-mono tabular-nums">{f.quantity ? withUnit(formatValue(f.value), f.unit) : "—"}</div>
+                    <div className="font-mono whitespace-nowrap tabular-nums">{f.quantity ? withUnit(formatValue(f.value), f.unit) : "—"}</div>
                     {f.verdict && (
                       <div className="mt-0.5">
                         <VerdictBadge verdict={f.verdict} />
@@ -72,7 +72,7 @@ export function FindingsTable({ buildId, branch, findings }: { buildId: string; 
                     ) : f.blockReason ? (
                       <span className="font-medium text-verdict-outside">blocks approval</span>
                     ) : (
-                      <span className="text-ink-faint dark:text-white/50">look only</span>
+                      <span className="text-ink-faint dark:text-white/50">does not block</span>
                     )}
                   </td>
                 </tr>
@@ -89,11 +89,11 @@ function BandCell({ f }: { f: GateFindingItem }) {
   if (f.bandVersion === null) return <span className="text-ink-faint">no band</span>;
   return (
     <>
-      <div className="font-mono tabular-nums">{formatBand(f)}</div>
+      <div className="font-mono whitespace-nowrap tabular-nums">{formatBand(f)}</div>
       {f.reference !== null && <div className="text-ink-soft dark:text-white/70">reference {formatSig(f.reference)}</div>}
       <div className="text-ink-faint dark:text-white/50" title={f.source ?? undefined}>
         {f.bandKind} · v{f.bandVersion}
-        {f.source && <span className="block max-w-56 truncate">{f.source}</span>}
+        {f.source && <span className="block max-w-80 truncate">{f.source}</span>}
       </div>
     </>
   );
@@ -107,7 +107,14 @@ function BaselineCell({ f, branch }: { f: GateFindingItem; branch: string }) {
         <div className="text-ink-faint">no baseline value</div>
       ) : (
         <div className="font-mono tabular-nums">
-          {formatValue(f.baselineValue)} <span className="text-ink-soft dark:text-white/70">(Δ {formatDifference(f.baselineDelta, f.baselineValue)})</span>
+          {formatValue(f.baselineValue)}
+          {f.baselineDelta !== null && (
+            <span className="text-ink-soft dark:text-white/70">
+              {" "}
+              (Δ {formatDifference(f.baselineDelta, f.baselineValue)}
+              {f.baselineValue !== 0 && `, ${formatDifferencePct((100 * f.baselineDelta) / Math.abs(f.baselineValue))}`})
+            </span>
+          )}
         </div>
       )}
       {f.drift && (

@@ -5,7 +5,7 @@ export function GateCaution({ compact = false }: { compact?: boolean }) {
     <aside
       role="note"
       aria-label="What this gate does not establish"
-      className="mb-5 flex gap-3 rounded-lg border-l-4 border-verdict-marginal bg-verdict-marginal/10 px-4 py-3 text-sm text-ink dark:bg-verdict-marginal/15 dark:text-white/90"
+      className="flex gap-3 rounded-lg border-l-4 border-verdict-marginal bg-verdict-marginal/10 px-4 py-3 text-sm text-ink dark:bg-verdict-marginal/15 dark:text-white/90"
     >
       <span aria-hidden className="mt-0.5 text-lg leading-none text-verdict-marginal">
         ⚠

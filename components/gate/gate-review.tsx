@@ -36,14 +36,14 @@ export function GateReview({ buildId, mayDecide }: { buildId: string; mayDecide:
       <div className="grid items-start gap-5 lg:grid-cols-3">
         <div className="space-y-5 lg:col-span-2">
           <BlockerPanel build={review.build} blockers={blockers} waived={waived} mayDecide={mayDecide} />
-          <FindingsTable buildId={review.build.id} branch={review.build.branch} findings={review.findings} />
+          <WaiversInForce waivers={review.waivers} mayDecide={mayDecide} />
         </div>
         <div className="space-y-5">
           <DecisionPanel review={review} blockerCount={blockers.length} mayDecide={mayDecide} />
           <DecisionHistory history={review.history} />
-          <WaiversInForce waivers={review.waivers} mayDecide={mayDecide} />
         </div>
       </div>
+      <FindingsTable buildId={review.build.id} branch={review.build.branch} findings={review.findings} />
     </div>
   );
 }

@@ -6,6 +6,8 @@ import { VerdictBadge } from "@/components/ui/verdict-badge";
 import type { GateReviewData } from "@/graphql/operations/gate";
 import { formatDayTime } from "./gate-format";
 
+const VERDICTS = ["within", "marginal", "outside", "unbanded", "missing"] as const;
+
 function Field({ label, children }: { label: string; children: ReactNode }) {
   return (
     <div className="min-w-0">
@@ -18,7 +20,8 @@ function Field({ label, children }: { label: string; children: ReactNode }) {
 /** Which build this is, where it came from, its verdict and its gate state now. */
 export function ReviewHeader({ review }: { review: GateReviewData }) {
   const { build, baseline } = review;
-  const runTotal = Object.values(build.runCounts).reduce((a, b) => a + b, 0);
+  // Sum the verdict counts only (the cached object also carries __typename).
+  const runTotal = VERDICTS.reduce((sum, v) => sum + build.runCounts[v], 0);
   return (
     <header className="rounded-lg border border-ink/10 bg-paper-raised p-4 dark:border-white/10 dark:bg-white/5">
       <div className="flex flex-wrap items-center gap-3">

@@ -13,7 +13,7 @@ export function RevokeForm({ waiver, onDone }: { waiver: WaiverItem; onDone: () 
   const [reason, setReason] = useState("");
   const [fieldError, setFieldError] = useState<string | undefined>();
   const [message, setMessage] = useState<string | null>(null);
-  const [revoke, { loading }] = useMutation(REVOKE_WAIVER, { refetchQueries: ["GateReview"], awaitRefetchQueries: true });
+  const [revoke, { loading }] = useMutation(REVOKE_WAIVER, { refetchQueries: "active", awaitRefetchQueries: true });
 
   async function submit(e: React.FormEvent) {
     e.preventDefault();

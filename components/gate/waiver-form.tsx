@@ -20,7 +20,7 @@ export function WaiverForm({ finding, branch, onDone }: { finding: GateFindingIt
   const [reason, setReason] = useState("");
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [message, setMessage] = useState<string | null>(null);
-  const [grant, { loading }] = useMutation(GRANT_WAIVER, { refetchQueries: ["GateReview"], awaitRefetchQueries: true });
+  const [grant, { loading }] = useMutation(GRANT_WAIVER, { refetchQueries: "active", awaitRefetchQueries: true });
 
   async function submit(e: React.FormEvent) {
     e.preventDefault();

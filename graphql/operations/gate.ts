@@ -186,3 +186,10 @@ export const REVOKE_WAIVER: TypedDocumentNode<{ revokeWaiver: WaiverItem }, { id
     revokeWaiver(id: $id, reason: $reason) { ...GateWaiverFields }
   }
 `;
+
+export const WAIVER_REGISTER: TypedDocumentNode<{ waivers: WaiverItem[] }, { includeEnded: boolean }> = gql`
+  ${WAIVER_FIELDS}
+  query WaiverRegister($includeEnded: Boolean) {
+    waivers(includeEnded: $includeEnded) { ...GateWaiverFields }
+  }
+`;

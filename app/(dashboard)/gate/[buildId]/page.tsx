@@ -25,7 +25,7 @@ export default async function GateReviewPage({ params }: { params: Promise<{ bui
   const session = await getCurrentSession();
   const role = session?.user.role;
   return (
-    <section>
+    <section className="space-y-5">
       <GateCaution />
       <GateReview buildId={parsed.data.buildId} mayDecide={role === "release" || role === "admin"} />
     </section>
