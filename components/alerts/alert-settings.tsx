@@ -26,7 +26,7 @@ export function AlertSettings() {
             {releaseManager ? (
               <strong className="text-ink dark:text-white">As release manager you receive every alert at once, on every case and branch.</strong>
             ) : (
-              "Release managers receive every alert at once. Everyone else hears only of the cases and branches subscribed here."
+              "Release managers receive every alert at once. Everyone else, administrators included, hears only of the cases and branches subscribed here."
             )}{" "}
             A re-post of a build that changes none of its findings sends nothing new.
           </li>
