@@ -9,6 +9,7 @@ export default withAuth({
 
 export const config = {
   // Everything but sign-in, the set-password links (the link is the proof), the auth and
-  // GraphQL endpoints (they answer 401 themselves), health, and static files.
-  matcher: ["/((?!sign-in|invite/|api/auth|api/graphql|api/health|_next/static|_next/image|favicon.ico).*)"],
+  // GraphQL endpoints (they answer 401 themselves), health, and static files (the app icon too,
+  // which the signed-out pages show).
+  matcher: ["/((?!sign-in|invite/|api/auth|api/graphql|api/health|_next/static|_next/image|favicon.ico|icon.svg).*)"],
 };

@@ -78,8 +78,9 @@ export function PeoplePanel({ meId, beside }: { meId: number; beside?: ReactNode
           <PeopleTable accounts={accounts} meId={meId} busyId={busyId} actions={actions} />
         )}
         <p className="mt-2 text-xs text-ink-faint">
-          A change counts on the person&apos;s next request: a switched-off account is signed out at once, a new role applies to the next page or API call. Nobody can switch
-          themselves off or change their own role, and the last active administrator stays.
+          A change counts on the person&apos;s next request: switching an account off signs it out at once (switching it back on does not revive old
+          sessions), a new role applies to the next page or API call, and a password set through a link ends the sessions opened with the old one. Nobody can
+          switch themselves off or change their own role, and the last active administrator stays.
         </p>
       </Panel>
       <div className="grid items-start gap-5 lg:grid-cols-2">

@@ -82,12 +82,16 @@ export async function updateAccountRole({ db, id, role }: { db: Db; id: number; 
   await db("users").where({ id }).update({ role });
 }
 
+/** Switching off also cuts off every session signed in so far, so switching back on does not revive them. */
 export async function updateAccountActive({ db, id, active, deactivatedAt }: { db: Db; id: number; active: boolean; deactivatedAt: Date | null }) {
-  await db("users").where({ id }).update({ active, deactivated_at: deactivatedAt });
+  await db("users")
+    .where({ id })
+    .update({ active, deactivated_at: deactivatedAt, ...(deactivatedAt ? { sessions_valid_from: deactivatedAt } : {}) });
 }
 
-export async function updateAccountPassword({ db, id, passwordHash }: { db: Db; id: number; passwordHash: string }) {
-  await db("users").where({ id }).update({ password_hash: passwordHash, active: true, deactivated_at: null });
+/** A new password ends every session opened with the old one. */
+export async function updateAccountPassword({ db, id, passwordHash, at }: { db: Db; id: number; passwordHash: string; at: Date }) {
+  await db("users").where({ id }).update({ password_hash: passwordHash, active: true, deactivated_at: null, sessions_valid_from: at });
 }
 
 /** What a session needs to know on every request: is the person still allowed in, and with which role. */
@@ -97,10 +101,12 @@ export interface SessionAccount {
   name: string;
   role: Role;
   active: boolean;
+  /** Sessions signed in before this are refused (set on deactivation and on a password set through a link). */
+  sessions_valid_from: Date | null;
 }
 
 export async function getSessionAccount({ db, id }: { db: Db; id: number }): Promise<SessionAccount | undefined> {
-  return db("users").where({ id }).first("id", "email", "name", "role", "active");
+  return db("users").where({ id }).first("id", "email", "name", "role", "active", "sessions_valid_from");
 }
 
 export interface InviteRow {

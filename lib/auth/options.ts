@@ -18,8 +18,9 @@ function getDummyHash(): string {
   return dummyHash;
 }
 
-// E-mail + password against bcrypt hashes in `users`; the role travels in the JWT
-// and the session so that server code can check it without another query.
+// E-mail + password against bcrypt hashes in `users`. The JWT carries the user id,
+// the role at sign-in and the sign-in time; lib/auth/session.ts checks the account
+// (still active, current role, sessions cut off since) on every request.
 export const authOptions: NextAuthOptions = {
   secret: getEnv().NEXTAUTH_SECRET,
   session: { strategy: "jwt", maxAge: 12 * 60 * 60 },
@@ -48,6 +49,8 @@ export const authOptions: NextAuthOptions = {
       if (user) {
         token.userId = Number(user.id);
         token.role = user.role;
+        // Only at sign-in: the token is re-issued on later requests, but this keeps the moment the password was checked.
+        token.signedInAt = Date.now();
       }
       return token;
     },
@@ -56,6 +59,7 @@ export const authOptions: NextAuthOptions = {
         session.user.id = token.userId;
         session.user.role = token.role;
       }
+      session.signedInAt = token.signedInAt ?? 0;
       return session;
     },
   },

@@ -10,7 +10,9 @@ import { authOptions } from "./options";
  * The signed-in person, checked against the database on every request. Sessions
  * are JWTs that live for hours, so the token alone would keep a deactivated
  * person in and keep an old role; here a deactivated account counts as signed
- * out at once and the role, name and e-mail are the current ones. React's cache
+ * out at once, so does a session older than the account's cut-off (a switch-off
+ * or a password set through a link), and the role, name and e-mail are the
+ * current ones. React's cache
  * makes this one query per server render; a route handler (GraphQL) calls it
  * once per request through its context.
  */
@@ -20,6 +22,7 @@ export const getCurrentSession = cache(async (): Promise<Session | null> => {
   if (!session?.user || typeof userId !== "number") return null;
   const account = await getSessionAccount({ db: getDb(), id: userId });
   if (!account || !account.active) return null;
+  if (account.sessions_valid_from && (session.signedInAt ?? 0) < account.sessions_valid_from.getTime()) return null;
   return { ...session, user: { ...session.user, id: account.id, role: account.role, name: account.name, email: account.email } };
 });
 

@@ -33,7 +33,7 @@ export function composePasswordLinkMail(m: PasswordLinkMail, appUrl: string) {
   const what =
     m.purpose === "invite"
       ? `${m.from} has made you a Tauline account as ${ROLE_WORDS[m.to.role]}. Tauline keeps the canonical-case results of every Cormorant build, their tolerance bands and the release decisions.`
-      : `${m.from} has sent you a link to set a new Tauline password. Your current password keeps working until you use it.`;
+      : `${m.from} has sent you a link to set a new Tauline password. Your current password keeps working until you use the link; then sessions opened with the old password end.`;
   const subject = m.purpose === "invite" ? "Your Tauline account: set your password" : "Tauline: set a new password";
   const text = [
     `Hello ${m.to.name},`,

@@ -24,7 +24,7 @@ import { parseInput } from "./builds-view";
 import { queuePasswordLinkMail } from "./invite-mail";
 import { auditAccount, emailTaken, hashPassword, hashUnusablePassword, requireAccount, toAccount, type Account } from "./users";
 
-// A set-password link is good for a week: long enough to survive a weekend,
+// A set-password link is good for a week: long enough to outlast a weekend,
 // short enough that a forgotten mail does not stay a way in.
 export const INVITE_LIFETIME_MS = 7 * 24 * 3600 * 1000;
 
@@ -131,7 +131,7 @@ export async function acceptPasswordLink({ unsafeInput }: { unsafeInput: unknown
     if (invite.expires_at.getTime() <= now.getTime()) throw refuse("This link has expired; ask an administrator for a new one.");
     const account = await requireAccount(trx, invite.user_id);
     if (account.status === "deactivated") throw refuse("This account is deactivated; ask an administrator.");
-    await updateAccountPassword({ db: trx, id: account.id, passwordHash });
+    await updateAccountPassword({ db: trx, id: account.id, passwordHash, at: now });
     await markInviteUsed({ db: trx, id: invite.id, at: now });
     await expireOpenInvites({ db: trx, userId: account.id, at: now });
     await insertAuditEntry({

@@ -60,14 +60,14 @@ describe("administration screen", () => {
     await admin.getByLabel("E-mail", { exact: true }).fill(INVITEE);
     await admin.getByLabel("Role", { exact: true }).selectOption("release");
     await admin.getByRole("button", { name: "Invite", exact: true }).click();
-    const link = (await admin.getByTestId("one-time-secret").textContent({ timeout: 30_000 }))?.trim() ?? "";
+    const link = (await admin.getByTestId("one-time-secret").textContent({ timeout: 60_000 }))?.trim() ?? "";
     expect(link).toMatch(/\/invite\/[A-Za-z0-9_-]{43}$/);
     await expect.poll(() => admin.locator(`tr[data-account="${INVITEE}"]`).textContent()).toContain("invited");
 
     await admin.getByRole("button", { name: "Done, hide it" }).click();
     await admin.locator('input[name="name"]').last().fill(`${TAG} nightly`);
     await admin.getByRole("button", { name: "Create token" }).click();
-    const secret = (await admin.getByTestId("one-time-secret").textContent({ timeout: 30_000 }))?.trim() ?? "";
+    const secret = (await admin.getByTestId("one-time-secret").textContent({ timeout: 60_000 }))?.trim() ?? "";
     expect(secret).toMatch(/^tl_[A-Za-z0-9_-]{43}$/);
     await admin.getByRole("button", { name: "Done, hide it" }).click();
     await admin.reload();

@@ -124,8 +124,26 @@ describe("people", () => {
     expect([302, 303, 307, 308]).toContain(page.status);
 
     await gql(admin, "mutation($id: ID!) { reactivateUser(userId: $id) { status } }", { id: user.id });
+    // Switching back on does not revive the cookie from before the switch-off; a fresh sign-in works.
+    expect((await gql(cookie, "{ branches }")).status).toBe(401);
     const back = await signIn(email("leaver"), PASSWORD);
     expect((await gql(back, "{ branches }")).body.errors).toBeUndefined();
+  });
+
+  it("ends the sessions opened with the old password when a password is reset through a link", async () => {
+    const user = await createUser("forgetful");
+    const before = await signIn(email("forgetful"), PASSWORD);
+    const res = await gql<{ issuePasswordLink: { url: string; account: { status: string } } }>(admin, "mutation($id: ID!) { issuePasswordLink(userId: $id) { url account { status } } }", { id: user.id });
+    expect(res.body.data!.issuePasswordLink.account.status).toBe("active");
+    // Until the link is used, the old password and its session keep working.
+    expect((await gql(before, "{ branches }")).body.errors).toBeUndefined();
+    const token = res.body.data!.issuePasswordLink.url.split("/invite/")[1];
+    const set = await postGraphQL({ query: "mutation($input: SetPasswordInput!) { setPasswordWithLink(input: $input) { email } }", variables: { input: { token, password: "separation-bubble-9" } } });
+    expect(set.body.errors).toBeUndefined();
+    expect((await gql(before, "{ branches }")).status).toBe(401);
+    await expect(signIn(email("forgetful"), PASSWORD)).rejects.toThrow();
+    const after = await signIn(email("forgetful"), "separation-bubble-9");
+    expect((await gql(after, "{ branches }")).body.errors).toBeUndefined();
   });
 
   it("applies a role change on the next request of an existing session", async () => {
@@ -152,6 +170,22 @@ describe("people", () => {
     await createUser("twin");
     const twin = await gql(admin, "mutation($input: NewUserInput!) { createUser(input: $input) { id } }", { input: { name: "Twin", email: email("twin").toUpperCase(), role: "qa", password: PASSWORD } });
     expect(twin.body.errors?.[0]?.extensions?.code).toBe("CONFLICT");
+  });
+
+  it("refuses every non-administrator and changes nothing", async () => {
+    const target = await createUser("bystander");
+    for (const role of ["developer", "qa", "release"]) {
+      const cookie = await signIn(`${role}@fenwick-hydro.test`);
+      const off = await gql(cookie, "mutation($id: ID!) { deactivateUser(userId: $id) { id } }", { id: target.id });
+      expect(off.body.errors?.[0]?.extensions?.code).toBe("FORBIDDEN");
+      const promote = await gql(cookie, "mutation($id: ID!) { setUserRole(userId: $id, role: admin) { id } }", { id: target.id });
+      expect(promote.body.errors?.[0]?.extensions?.code).toBe("FORBIDDEN");
+      const token = await gql(cookie, "mutation($input: CiTokenInput!) { createCiToken(input: $input) { secret } }", { input: { name: `${TAG} by ${role}` } });
+      expect(token.status).toBe(403);
+    }
+    const row = await testDb()("users").where({ id: target.id }).first();
+    expect([row.role, row.active]).toEqual(["developer", true]);
+    expect(await testDb()("ci_tokens").where("name", "like", `${TAG} by %`).pluck("id")).toEqual([]);
   });
 
   it("stores a bcrypt hash of cost 10 or more and never returns the password", async () => {
