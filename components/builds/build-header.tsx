@@ -5,6 +5,7 @@ import { VerdictBadge } from "@/components/ui/verdict-badge";
 import type { VerdictCounts } from "@/graphql/operations/builds";
 import { formatUtc } from "./format-time";
 import { GateStateTag } from "./gate-state-tag";
+import { ReevaluationNote } from "./reevaluation-note";
 import { RunCounts } from "./run-counts";
 
 function Field({ label, children }: { label: string; children: React.ReactNode }) {
@@ -80,6 +81,7 @@ export function BuildHeader({
           {decision.comment && <span className="text-ink-soft dark:text-white/70"> — “{decision.comment}”</span>}
         </p>
       )}
+      <ReevaluationNote buildId={String(build.id)} />
     </header>
   );
 }

@@ -21,19 +21,21 @@ export async function getRecentBuildsOfCase({ db, caseKey, branch, limit }: { db
 export interface ScopeJudgementRow {
   build_id: number;
   model_key: string;
+  value: number | null;
+  verdict: Verdict;
   band_id: number | null;
   band_version: number | null;
   band_model: string | null;
 }
 
-/** Which band version each build's values of one case and quantity were judged against, per model. */
+/** Each build's stored values of one case and quantity, with the verdict and band version they were judged with. */
 export async function getScopeJudgements({ db, caseKey, quantityKey, buildIds }: { db: Db; caseKey: string; quantityKey: string; buildIds: readonly number[] }): Promise<ScopeJudgementRow[]> {
   if (buildIds.length === 0) return [];
   return db("quantity_values as v")
     .leftJoin("bands as b", "b.id", "v.band_id")
     .where({ "v.case_key": caseKey, "v.quantity_key": quantityKey })
     .whereIn("v.build_id", buildIds as number[])
-    .distinct("v.build_id", "v.model_key", "v.band_id", "b.version as band_version", "b.model_key as band_model");
+    .select("v.build_id", "v.model_key", "v.value", "v.verdict", "v.band_id", "b.version as band_version", "b.model_key as band_model");
 }
 
 export type RejudgeRunRow = Pick<RunRow, "id" | "build_id" | "case_key" | "model_key" | "grid" | "status">;

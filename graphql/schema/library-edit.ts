@@ -129,6 +129,12 @@ export const libraryEditTypeDefs = /* GraphQL */ `
     superseded: Boolean!
     "Superseded and not re-judged since the scope's version in force began: the picker's default."
     stale: Boolean!
+    "The build's stored values in this scope (one per model and grid)."
+    values: [Float]!
+    "Worst verdict of those values as originally judged; null when the build has none in the scope."
+    verdictAsJudged: Verdict
+    "Worst verdict of the same stored values against the bands in force now."
+    verdictNow: Verdict
     latestReevaluation: Reevaluation
   }
 

@@ -14,6 +14,7 @@ import {
   insertReevaluatedValues,
   insertReevaluation,
 } from "@/db/queries/reevaluations";
+import { judgeValue, worstVerdict } from "@/lib/analysis";
 import { AppError } from "@/lib/errors";
 import { reevaluationCandidatesSchema, reevaluationRequestSchema } from "@/lib/validation/case";
 import { actorUserId, type Actor } from "./actor";
@@ -123,6 +124,16 @@ export async function findReevaluationCandidates({ actor, unsafeInput }: { actor
     const superseded = mine.some((j) => j.band_id !== (inForceFor(j.model_key)?.id ?? null));
     const latestReevaluation = latest.find((r) => r.build_id === build.id) ?? null;
     const rejudgedSince = latestReevaluation !== null && scopeSince !== null && latestReevaluation.evaluated_at >= scopeSince;
-    return { build, judgedAgainst, superseded, latestReevaluation, stale: superseded && !rejudgedSince };
+    return {
+      build,
+      judgedAgainst,
+      superseded,
+      latestReevaluation,
+      stale: superseded && !rejudgedSince,
+      values: mine.map((j) => j.value),
+      // What a re-judgement would say for this scope: the same judgeValue, with the band in force now.
+      verdictAsJudged: mine.length ? worstVerdict(mine.map((j) => j.verdict)) : null,
+      verdictNow: mine.length ? worstVerdict(mine.map((j) => judgeValue(j.value, inForceFor(j.model_key)))) : null,
+    };
   });
 }

@@ -1,5 +1,7 @@
+import Link from "next/link";
 import { notFound } from "next/navigation";
 import { z } from "zod";
+import { mayEditLibrary } from "@/components/band-editor/editing-refused";
 import { CaseDetail } from "@/components/cases/case-detail";
 import { PageTitle } from "@/components/ui/panel";
 import { getSessionActor } from "@/lib/auth/session";
@@ -11,11 +13,18 @@ export default async function CasePage({ params }: { params: Promise<{ caseKey: 
   const parsed = paramsSchema.safeParse(await params);
   if (!parsed.success) notFound();
   // Title and existence on the server, so an unknown key is a real 404; the library data loads in the client leaf.
-  const [found] = await findCases({ actor: await getSessionActor(), key: parsed.data.caseKey });
+  const actor = await getSessionActor();
+  const [found] = await findCases({ actor, key: parsed.data.caseKey });
   if (!found) notFound();
   return (
     <>
-      <PageTitle title={found.title} lead={found.description} />
+      <PageTitle title={found.title} lead={found.description}>
+        {mayEditLibrary(actor) && (
+          <Link href={`/cases/${found.key}/edit`} className="rounded bg-tide-700 px-3 py-1.5 text-sm font-medium text-white hover:bg-tide-900">
+            Edit case and bands
+          </Link>
+        )}
+      </PageTitle>
       <CaseDetail caseKey={found.key} />
     </>
   );
