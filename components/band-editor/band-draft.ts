@@ -92,11 +92,14 @@ export function fitSettingsFromText(fit: Record<FitKey, string>, errors: Record<
  */
 export function bandInputFromDraft(draft: BandDraft, scope: { caseKey: string; quantityKey: string; model: string | null }): { input: BandRevision | null; errors: Record<string, string> } {
   const textErrors: Record<string, string> = {};
+  // Text that is not a number is reported by its own message; the schema then sees
+  // a neutral value there (null, or 0 where a number is required) so that its other
+  // checks still run.
   const num = (field: "reference" | "lower" | "upper" | "marginalMargin" | "noiseFloor", required: boolean) => {
     const parsed = parseNumberText(draft[field]);
     if (!parsed.ok) textErrors[field] = parsed.message;
     else if (required && parsed.value === null) textErrors[field] = "must be a number (0 for none)";
-    return parsed.ok ? parsed.value : Number.NaN;
+    return parsed.ok && parsed.value !== null ? parsed.value : required ? 0 : null;
   };
   const candidate = {
     ...scope,
@@ -105,12 +108,29 @@ export function bandInputFromDraft(draft: BandDraft, scope: { caseKey: string; q
     source: draft.source,
     lower: num("lower", false),
     upper: num("upper", false),
-    marginalMargin: num("marginalMargin", true) ?? Number.NaN,
-    noiseFloor: num("noiseFloor", true) ?? Number.NaN,
+    marginalMargin: num("marginalMargin", true) as number,
+    noiseFloor: num("noiseFloor", true) as number,
     fitSettings: fitSettingsFromText(draft.fit, textErrors, "fitSettings"),
     reason: draft.reason,
   };
-  const parsed = bandRevisionSchema.safeParse(candidate);
-  const errors = { ...(parsed.success ? {} : fieldErrorsOf(parsed.error.issues)), ...textErrors };
-  return Object.keys(errors).length === 0 && parsed.success ? { input: parsed.data, errors: {} } : { input: null, errors };
+  const first = bandRevisionSchema.safeParse(candidate);
+  let errors: Record<string, string> = first.success ? {} : fieldErrorsOf(first.error.issues);
+  if (!first.success) {
+    // Zod runs the band-wide checks (limit order, at least one limit) only when every
+    // field passed; run them again with the failing fields neutralised so the form
+    // shows all its errors at once.
+    const bad = (prefix: string) => Object.keys(errors).some((k) => k === prefix || k.startsWith(`${prefix}.`));
+    const neutral = {
+      ...candidate,
+      source: bad("source") ? "placeholder source" : candidate.source,
+      reason: bad("reason") ? "placeholder reason" : candidate.reason,
+      marginalMargin: bad("marginalMargin") ? 0 : candidate.marginalMargin,
+      noiseFloor: bad("noiseFloor") ? 0 : candidate.noiseFloor,
+      fitSettings: bad("fitSettings") ? {} : candidate.fitSettings,
+    };
+    const second = bandRevisionSchema.safeParse(neutral);
+    if (!second.success) errors = { ...fieldErrorsOf(second.error.issues), ...errors };
+  }
+  errors = { ...errors, ...textErrors };
+  return Object.keys(errors).length === 0 && first.success ? { input: first.data, errors: {} } : { input: null, errors };
 }
