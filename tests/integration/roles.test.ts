@@ -6,6 +6,7 @@ import { SUBMIT, ciToken, postGraphQL, randomCommit } from "../helpers/graphql";
 import { signIn } from "../helpers/session";
 import { DECIDE, GRANT, REVOKE, postStepBuild, stepWaiver } from "./gate-helpers";
 import { alertOperations } from "./alerts-roles";
+import { libraryEditOperations } from "./library-edit-roles";
 
 // The role matrix (DESIGN.md "Who uses it"): every query and mutation, for every
 // kind of caller. Enforced on the server: a refused call is an error with a code
@@ -114,6 +115,7 @@ const OPERATIONS: Operation[] = [
     run: async (c) => call(c, "mutation($input: SetPasswordInput!) { setPasswordWithLink(input: $input) { email } }", { input: { token: await matrixLink(c), password: "role-matrix-pw-1" } }),
   },
   ...alertOperations(call),
+  ...libraryEditOperations(call),
 ];
 
 describe("role matrix", () => {
