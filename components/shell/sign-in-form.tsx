@@ -2,12 +2,16 @@
 
 import { signIn } from "next-auth/react";
 import { useRouter } from "next/navigation";
-import { useState, type FormEvent } from "react";
+import { useEffect, useState, type FormEvent } from "react";
 
 export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
   const router = useRouter();
   const [error, setError] = useState<string | null>(null);
   const [pending, setPending] = useState(false);
+  // Until React has attached the submit handler the button stays disabled: a
+  // native submit would put the password into the page URL.
+  const [ready, setReady] = useState(false);
+  useEffect(() => setReady(true), []);
 
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
@@ -29,7 +33,7 @@ export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
   }
 
   return (
-    <form onSubmit={onSubmit} className="mt-8 space-y-4" aria-describedby={error ? "sign-in-error" : undefined}>
+    <form onSubmit={onSubmit} method="post" data-ready={ready ? "true" : "false"} className="mt-8 space-y-4" aria-describedby={error ? "sign-in-error" : undefined}>
       <label className="block text-sm">
         <span className="font-medium">E-mail</span>
         <input
@@ -57,7 +61,7 @@ export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
       )}
       <button
         type="submit"
-        disabled={pending}
+        disabled={pending || !ready}
         className="w-full rounded bg-tide-700 px-3 py-2 text-sm font-medium text-white hover:bg-tide-900 disabled:opacity-60"
       >
         {pending ? "Signing in…" : "Sign in"}

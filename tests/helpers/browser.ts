@@ -56,6 +56,8 @@ export async function openBrowserSession(): Promise<BrowserSession> {
 /** Signs in through the real sign-in form, as a person would, and waits to leave it. */
 export async function signInThroughForm(page: Page, baseUrl: string, email: string, password: string): Promise<void> {
   await page.goto(`${baseUrl}/sign-in`, { waitUntil: "domcontentloaded" });
+  // The form is live once React has hydrated it (the button is disabled before).
+  await page.locator('form[data-ready="true"]').waitFor({ timeout: 60_000 });
   await page.getByLabel("E-mail").fill(email);
   await page.getByLabel("Password").fill(password);
   await page.getByRole("button", { name: "Sign in" }).click();
