@@ -6,7 +6,7 @@ import { parseNumberText } from "./number-text";
 // reviseBand input and checks it with the server's own schema, so the form shows
 // the same complaints, per field, before anything is sent.
 
-export const FIT_KEYS = ["reTau", "yPlusMin", "yPlusMax", "cfStation", "cfStationLabel", "stepHeight", "residualTargetOrders"] as const;
+export const FIT_KEYS = ["yPlusMin", "yPlusMax", "reTau", "cfStation", "cfStationLabel", "stepHeight", "residualTargetOrders"] as const;
 export type FitKey = (typeof FIT_KEYS)[number];
 
 export interface BandDraft {
@@ -32,9 +32,15 @@ export interface BandLike {
   fitSettings: Record<string, unknown>;
 }
 
-// String(v) keeps every digit, so an untouched field saves the stored value exactly
-// (a rounded echo would show up as a change in the history).
-const numText = (v: unknown) => (typeof v === "number" && Number.isFinite(v) ? String(v) : "");
+// Every digit is kept, so an untouched field saves the stored value exactly (a
+// rounded echo would show up as a change in the history). Very large and small
+// magnitudes are written as engineers type them, 4.8504e6 rather than 4850400;
+// toExponential() without digits is the shortest form that reads back the same.
+function numText(v: unknown): string {
+  if (typeof v !== "number" || !Number.isFinite(v)) return "";
+  const abs = Math.abs(v);
+  return abs !== 0 && (abs >= 1e5 || abs < 1e-3) ? v.toExponential().replace("e+", "e") : String(v);
+}
 
 /** Fit settings (a band's override or a case's defaults) as the text of their fields. */
 export function fitTextFrom(fs: Record<string, unknown>): Record<FitKey, string> {

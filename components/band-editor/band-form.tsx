@@ -4,7 +4,7 @@ import { useMutation } from "@apollo/client/react";
 import { useState, type FormEvent } from "react";
 import { relativeLimits } from "@/components/cases/case-text";
 import { REVISE_BAND, type BandVersionInfo } from "@/graphql/operations/library-edit";
-import { bandInputFromDraft, draftFromBand, type BandDraft, type FitKey } from "./band-draft";
+import { bandInputFromDraft, draftFromBand, fitTextFrom, type BandDraft, type FitKey } from "./band-draft";
 import { BandPreview, type PreviewBand } from "./band-preview";
 import { FIT_LABELS, FIT_SETTINGS_ELSEWHERE, fitFieldsFor } from "./fit-fields";
 import { NumberField, ReasonField, SubmitRow, TextField } from "./form-controls";
@@ -17,6 +17,8 @@ interface Props {
   current: BandVersionInfo | null;
   /** The case-wide band a new model band starts from, when the model has none yet. */
   startFrom: BandVersionInfo | null;
+  /** The case's fit settings, shown in the empty override fields as what applies. */
+  caseSettings: Record<string, unknown>;
   onSaved: (saved: { version: number }) => void;
 }
 
@@ -26,7 +28,7 @@ const KINDS = [
 ] as const;
 
 /** The QA lead's form for a new version of one band scope. */
-export function BandForm({ scope, unit, current, startFrom, onSaved }: Props) {
+export function BandForm({ scope, unit, current, startFrom, caseSettings, onSaved }: Props) {
   const [draft, setDraft] = useState<BandDraft>(() => draftFromBand(current ?? startFrom));
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [formError, setFormError] = useState<string | null>(null);
@@ -63,6 +65,8 @@ export function BandForm({ scope, unit, current, startFrom, onSaved }: Props) {
   ];
   const rel = relativeLimits(num(draft.reference), num(draft.lower), num(draft.upper));
   const fitKeys = fitFieldsFor(scope.quantityKey, draft.fit);
+  const caseText = fitTextFrom(caseSettings);
+  const placeholder = (key: FitKey) => (caseText[key] ? `case: ${caseText[key]}` : "not set");
 
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-4" aria-label="New band version">
@@ -94,11 +98,11 @@ export function BandForm({ scope, unit, current, startFrom, onSaved }: Props) {
       {fitKeys.length > 0 ? (
         <fieldset className="rounded border border-ink/10 p-3 dark:border-white/10">
           <legend className="px-1 text-sm font-medium">Fit settings of this band</legend>
-          <p className="text-xs text-ink-faint">Empty fields use the case&apos;s fit settings. They apply to builds posted from now on; stored values are not refitted.</p>
+          <p className="text-xs text-ink-faint">An empty field uses the case&apos;s setting (shown greyed). Settings apply to builds posted from now on; stored values are not refitted.</p>
           <div className="mt-2 grid gap-4 sm:grid-cols-2">
             {fitKeys.map((key) =>
               key === "cfStationLabel" ? (
-                <TextField key={key} label={FIT_LABELS[key].label} value={draft.fit[key]} onChange={(v) => setFit(key, v)} error={errors["fitSettings.cfStationLabel"]} hint={FIT_LABELS[key].hint} />
+                <TextField key={key} label={FIT_LABELS[key].label} value={draft.fit[key]} onChange={(v) => setFit(key, v)} error={errors["fitSettings.cfStationLabel"]} hint={FIT_LABELS[key].hint} placeholder={placeholder(key)} />
               ) : (
                 <NumberField
                   key={key}
@@ -108,6 +112,7 @@ export function BandForm({ scope, unit, current, startFrom, onSaved }: Props) {
                   error={errors[key === "yPlusMin" || key === "yPlusMax" ? `fitSettings.logLawWindow.${key}` : `fitSettings.${key}`]}
                   hint={FIT_LABELS[key].hint}
                   unit={FIT_LABELS[key].unit}
+                  placeholder={placeholder(key)}
                 />
               ),
             )}

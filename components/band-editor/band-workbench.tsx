@@ -59,6 +59,7 @@ export function BandWorkbench({ caseKey, quantityKey, model }: { caseKey: string
             unit={quantity.unit}
             current={current}
             startFrom={startFrom}
+            caseSettings={c.parameters}
             onSaved={({ version }) => {
               setSaved(version);
               void versions.refetch();

@@ -110,10 +110,10 @@ export function ReasonField({ value, onChange, error, hint }: { value: string; o
   );
 }
 
-export function SubmitRow({ label, pending, pendingLabel, formError, children }: { label: string; pending: boolean; pendingLabel: string; formError?: string | null; children?: ReactNode }) {
+export function SubmitRow({ label, pending, pendingLabel, formError, disabled = false, children }: { label: string; pending: boolean; pendingLabel: string; formError?: string | null; disabled?: boolean; children?: ReactNode }) {
   return (
     <div className="flex flex-wrap items-center gap-3 border-t border-ink/10 pt-3 dark:border-white/10">
-      <button type="submit" disabled={pending} className="rounded bg-tide-700 px-3 py-1.5 text-sm font-medium text-white hover:bg-tide-900 disabled:opacity-60">
+      <button type="submit" disabled={pending || disabled} className="rounded bg-tide-700 px-3 py-1.5 text-sm font-medium text-white hover:bg-tide-900 disabled:opacity-60">
         {pending ? pendingLabel : label}
       </button>
       {children}

@@ -29,7 +29,8 @@ interface Props {
 export function ReevaluationPanel({ scope, suggestedReason, fitChanged, unit }: Props) {
   const { params, update } = useQueryParams();
   const branch = params.get("branch") || null;
-  const { data, loading, error, refetch } = useQuery(REEVALUATION_CANDIDATES, { variables: { ...scope, branch, last: 40 } });
+  // Always asked again: a band saved a moment ago changes which builds are stale.
+  const { data, loading, error, refetch } = useQuery(REEVALUATION_CANDIDATES, { variables: { ...scope, branch, last: 40 }, fetchPolicy: "cache-and-network" });
   const [picked, setPicked] = useState<Set<string> | null>(null);
   const [reason, setReason] = useState(suggestedReason);
   const [errors, setErrors] = useState<Record<string, string>>({});
@@ -103,7 +104,7 @@ export function ReevaluationPanel({ scope, suggestedReason, fitChanged, unit }: 
           <CandidateTable candidates={candidates} selected={selected} onToggle={toggle} unit={unit} />
           {errors.buildIds && <p role="alert" className="text-xs font-medium text-verdict-outside">{errors.buildIds}</p>}
           <ReasonField value={reason} onChange={setReason} error={errors.reason} hint="Kept with each re-judgement and shown on the build page." />
-          <SubmitRow label={`Re-judge ${selected.size} build${selected.size === 1 ? "" : "s"}`} pending={sending} pendingLabel="Re-judging…" formError={formError} />
+          <SubmitRow label={`Re-judge ${selected.size} build${selected.size === 1 ? "" : "s"}`} pending={sending} pendingLabel="Re-judging…" formError={formError} disabled={selected.size === 0} />
         </form>
       )}
       {outcome.length > 0 && (

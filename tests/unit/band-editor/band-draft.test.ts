@@ -35,6 +35,13 @@ describe("parseNumberText", () => {
 });
 
 describe("bandInputFromDraft", () => {
+  it("writes tiny and huge magnitudes in exponent form that reads back exactly", () => {
+    const draft = draftFromBand({ ...kappaBand, reference: 0.0026556, lower: 0.00026556 * 0.97, upper: 1 / 3, fitSettings: {} });
+    expect(draft.lower).toBe((0.00026556 * 0.97).toExponential());
+    expect(parseNumberText(draft.lower)).toEqual({ ok: true, value: 0.00026556 * 0.97 });
+    expect(parseNumberText(draft.upper)).toEqual({ ok: true, value: 1 / 3 });
+  });
+
   it("saves an untouched stored value exactly (no rounding through the text field)", () => {
     const n = 1 / 0.92;
     const draft = { ...draftFromBand({ ...kappaBand, reference: n, lower: n * 0.99, upper: n * 1.01, fitSettings: {} }), reason: "re-check of the decay band" };
@@ -84,6 +91,7 @@ describe("fit settings text", () => {
   it("round-trips the TMR flat-plate station and leaves empty fields out", () => {
     // TMR 2DZP station Re_x = 4.8504e6 (x = 0.97008 at Re = 5e6 per unit length; reference sheet §7.2).
     const text = fitTextFrom({ cfStation: 4.8504e6, cfStationLabel: "Re_x = 4.8504e6 (TMR x = 0.97008)" });
+    expect(text.cfStation).toBe("4.8504e6");
     const errors: Record<string, string> = {};
     expect(fitSettingsFromText(text, errors, "parameters")).toEqual({ cfStation: 4.8504e6, cfStationLabel: "Re_x = 4.8504e6 (TMR x = 0.97008)" });
     expect(errors).toEqual({});
