@@ -52,7 +52,7 @@ export function CaseQuantity({
           ))}
         </div>
       )}
-      <BandHistory records={history} />
+      <BandHistory records={history} unit={q.unit} />
     </section>
   );
 }

@@ -31,9 +31,9 @@ const same = (a: unknown, b: unknown) => (a ?? null) === (b ?? null) || JSON.str
  * leaf. `fields` names the top-level keys that count (ids, versions and dates of
  * the record itself are not changes). A record without a predecessor has none.
  */
-export function diffFields(before: Plain | null, after: Plain, fields: readonly string[]): FieldChange[] {
+export function diffFields(before: object | null, after: object, fields: readonly string[]): FieldChange[] {
   if (before === null) return [];
-  const pick = (r: Plain) => flatten(Object.fromEntries(fields.map((f) => [f, r[f]])));
+  const pick = (r: object) => flatten(Object.fromEntries(fields.map((f) => [f, (r as Plain)[f]])));
   const a = pick(before);
   const b = pick(after);
   const paths = [...new Set([...Object.keys(a), ...Object.keys(b)])];
