@@ -61,6 +61,7 @@ export function BandForm({ scope, unit, current, startFrom, caseSettings, onSave
   };
   const preview: PreviewBand[] = [
     ...(current ? [{ label: `v${current.version} now`, reference: current.reference, lower: current.lower, upper: current.upper, marginalMargin: current.marginalMargin }] : []),
+    ...(!current && startFrom ? [{ label: "case-wide", reference: startFrom.reference, lower: startFrom.lower, upper: startFrom.upper, marginalMargin: startFrom.marginalMargin }] : []),
     { label: "draft", reference: num(draft.reference), lower: num(draft.lower), upper: num(draft.upper), marginalMargin: num(draft.marginalMargin) ?? 0 },
   ];
   const rel = relativeLimits(num(draft.reference), num(draft.lower), num(draft.upper));
