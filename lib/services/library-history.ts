@@ -60,12 +60,8 @@ function describeEntry(row: LibraryAuditRow): LibraryChange {
     const what = `band ${scope.quantity} · ${scope.model ?? "all models"} v${d.version}`;
     return { ...base, subject: row.action === "band.created" ? `${what} created` : what, changes: diff(BAND_FIELDS) };
   }
-  const build = (d.build ?? {}) as { version?: string };
-  return {
-    ...base,
-    subject: `build ${build.version ?? row.entity_id} re-judged`,
-    changes: [{ field: "verdict", before: d.originalVerdict ?? null, after: d.verdict ?? null }],
-  };
+  const build = `build ${((d.build ?? {}) as { version?: string }).version ?? row.entity_id}`;
+  return { ...base, subject: `${build} re-judged`, changes: [{ field: build, before: d.originalVerdict ?? null, after: d.verdict ?? null }] };
 }
 
 /**
@@ -81,14 +77,12 @@ export async function findCaseChangeRecord({ actor, caseKey, last }: { actor: Ac
   for (const row of rows) {
     const entry = describeEntry(row);
     const prev = out.at(-1);
-    if (row.action === "build.reevaluated" && prev?.action === "build.reevaluated" && prev.at.getTime() === row.at.getTime()) {
-      const version = ((row.details as Details).build as { version?: string } | undefined)?.version ?? row.entity_id;
-      prev.changes.push({ field: `build ${version}`, before: entry.changes[0].before, after: entry.changes[0].after });
+    if (row.action === "build.reevaluated" && prev?.action === row.action && prev.at.getTime() === row.at.getTime()) {
+      prev.changes.push(...entry.changes);
       prev.subject = `${prev.changes.length} builds re-judged`;
-      continue;
+    } else {
+      out.push(entry);
     }
-    if (row.action === "build.reevaluated") entry.changes = [{ field: entry.subject.replace(/ re-judged$/, ""), before: entry.changes[0].before, after: entry.changes[0].after }];
-    out.push(entry);
   }
   return out;
 }

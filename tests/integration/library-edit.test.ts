@@ -198,6 +198,8 @@ describe("re-judging stored builds", () => {
       { c: CASE },
     );
     expect(again.body.data!.reevaluationCandidates.find((c) => c.build.id === build.id)!.stale).toBe(false);
+    const record = await gql<{ caseChangeRecord: { subject: string; changes: { before: unknown; after: unknown }[] }[] }>(`query($c: String!) { caseChangeRecord(caseKey: $c) { subject changes { before after } } }`, { c: CASE });
+    expect(record.body.data!.caseChangeRecord[0]).toEqual({ subject: "build 0.0.0-library-edit re-judged", changes: [{ before: "within", after: "outside" }] });
   });
 
   it("judges a quantity that a band added later expects, and the run never produced, missing", async () => {
