@@ -118,5 +118,14 @@ describe("tightening a band", () => {
     await note.waitFor({ timeout: 60_000 });
     expect(await note.innerText()).toMatch(/as judged\s*●?\s*within[\s\S]*re-judged\s*✕?\s*outside/);
     await page.screenshot({ path: "test-results/qa-band-build.png" });
+
+    // The case's change record lists the band revision with its diff and the re-judgement.
+    await page.goto(`${baseUrl}/cases/${CASE}/edit`, { waitUntil: "load" });
+    const record = page.getByRole("list", { name: "Change record" });
+    await record.waitFor({ timeout: 60_000 });
+    const text = await record.innerText();
+    expect(text).toMatch(/band kappa · all models v2[\s\S]*upper limit\s*0\.44 → 0\.43/);
+    expect(text).toMatch(/build 0\.0\.0-qa-band re-judged/);
+    await page.screenshot({ path: "test-results/qa-band-change-record.png", fullPage: true });
   });
 });
