@@ -1,0 +1,96 @@
+import { Client } from "pg";
+import { graphQLBody, postGraphQLBody, requireEnv } from "./http";
+import { ratio, timeRepeated, type Timing } from "./stats";
+
+// Section 2: trend(case, quantity, model, branch, last) as history grows. Each
+// history size lives on a branch of its own in the same tables, so the larger
+// histories also sit beside the smaller ones, as on a real server.
+
+const TREND = /* GraphQL */ `
+  query Trend($case: String!, $quantity: String!, $model: String!, $branch: String!, $last: Int!) {
+    trend(case: $case, quantity: $quantity, model: $model, branch: $branch, last: $last) {
+      points { buildId commit version receivedAt value verdict drift driftReason bandVersion reference lower upper marginalMargin }
+    }
+  }
+`;
+
+// The statement db/queries/quantity-values.ts getTrendPoints builds with knex, written out.
+const BARE_TREND_SQL = `
+  select v.build_id, b.commit, b.version, v.build_received_at, v.value, v.verdict, v.drift, v.drift_reason, v.band_id,
+         d.reference, d.lower, d.upper, d.marginal_margin, d.version as band_version
+    from quantity_values as v
+    inner join builds as b on b.id = v.build_id
+    left join bands as d on d.id = v.band_id
+   where v.case_key = $1 and v.quantity_key = $2 and v.model_key = $3 and v.branch = $4 and v.grid = $5
+   order by v.build_received_at desc, v.build_id desc
+   limit $6`;
+
+const SERIES = { case: "flat-plate-zpg", quantity: "kappa", model: "sa", grid: "default" };
+
+export interface TrendSize {
+  history: number;
+  last: number;
+  seedSeconds: number;
+  http: Timing;
+  bare: Timing;
+  trendRatio: number;
+  httpPerPointMs: number;
+  barePerPointMs: number;
+}
+
+/** Bulk path: builds, runs and quantity_values of one series from generate_series in one statement. */
+async function seedHistory(client: Client, branch: string, n: number): Promise<void> {
+  const band = await client.query<{ id: string }>(
+    "select id from bands where case_key = $1 and quantity_key = $2 and (model_key = $3 or model_key is null) order by version desc limit 1",
+    [SERIES.case, SERIES.quantity, SERIES.model],
+  );
+  await client.query(
+    `with b as (
+       insert into builds (solver, version, commit, branch, received_at, updated_at, verdict)
+       select 'Cormorant', '9.' || g, md5($1 || g) || left(md5('c' || $1 || g), 8), $1,
+              now() - make_interval(mins => $2 - g), now() - make_interval(mins => $2 - g), 'within'
+         from generate_series(1, $2::int) g
+       returning id, received_at),
+     r as (
+       insert into runs (build_id, case_key, model_key, grid, status, verdict, received_at)
+       select id, $3, $4, $5, 'COMPLETED', 'within', received_at from b
+       returning id, build_id, received_at)
+     insert into quantity_values (run_id, build_id, case_key, model_key, grid, branch, build_received_at, quantity_key, value, origin, band_id, verdict)
+     select r.id, r.build_id, $3, $4, $5, $1, r.received_at, $6, 0.41 + 0.002 * (random() - 0.5), 'derived', $7, 'within' from r`,
+    [branch, n, SERIES.case, SERIES.model, SERIES.grid, SERIES.quantity, band.rows[0]?.id ?? null],
+  );
+}
+
+export async function benchTrend({ sizes, last, repeats, cookie }: { sizes: number[]; last: number; repeats: number; cookie: string }): Promise<TrendSize[]> {
+  const client = new Client({ connectionString: requireEnv("DATABASE_URL") });
+  await client.connect();
+  const out: TrendSize[] = [];
+  try {
+    for (const n of sizes) {
+      const branch = `bench/trend-${n}-${process.pid}`;
+      const started = Date.now();
+      await seedHistory(client, branch, n);
+      await client.query("analyze builds, runs, quantity_values");
+      const seedSeconds = (Date.now() - started) / 1000;
+      const variables = { case: SERIES.case, quantity: SERIES.quantity, model: SERIES.model, branch, last };
+      const body = graphQLBody(TREND, variables);
+      let points = 0;
+      const http = await timeRepeated(async () => {
+        const data = (await postGraphQLBody(body, { cookie })) as { trend: { points: unknown[] } };
+        points = data.trend.points.length;
+      }, repeats, 3);
+      const params = [SERIES.case, SERIES.quantity, SERIES.model, branch, SERIES.grid, last];
+      const bare = await timeRepeated(() => client.query(BARE_TREND_SQL, params), repeats, 3);
+      const returned = Math.max(points, 1);
+      out.push({
+        history: n, last: points, seedSeconds, http, bare,
+        trendRatio: ratio(http.median, bare.median),
+        httpPerPointMs: http.median / returned,
+        barePerPointMs: bare.median / returned,
+      });
+    }
+  } finally {
+    await client.end();
+  }
+  return out;
+}
