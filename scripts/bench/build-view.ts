@@ -30,7 +30,7 @@ const BARE_BUILD_SQL = [
   `select v.*, d.reference, d.source, d.lower, d.upper, d.marginal_margin, q.label, q.unit
      from quantity_values v
      left join bands d on d.id = v.band_id
-     left join quantities q on q.key = v.quantity_key
+     left join quantity_definitions q on q.key = v.quantity_key
     where v.build_id = $1
     order by v.run_id, v.id`,
 ];
