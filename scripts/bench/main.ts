@@ -21,7 +21,7 @@ async function main() {
   step("ingest: small submission");
   const small = await benchIngest({ runs: 5, repeats: 7, label: "small" });
   step("ingest: large submission");
-  const large = await benchIngest({ runs: quick ? 20 : 200, repeats: quick ? 2 : 4, label: "large" });
+  const large = await benchIngest({ runs: quick ? 20 : 200, repeats: quick ? 2 : 6, label: "large" });
 
   const cookie = await signIn("developer@fenwick-hydro.test");
   step("trend");
