@@ -61,6 +61,7 @@ export function printReport(r: BenchReport): void {
   for (const t of r.trend) {
     console.log(`       ${pad(String(t.history), 8)} ${pad(String(t.last), 7)} ${pad(ms(t.http.median), 12)} ${pad(ms(t.bare.median), 12)} ${pad(t.trendRatio.toFixed(2), 6)} ${pad(t.httpPerPointMs.toFixed(4), 14)} ${t.seedSeconds.toFixed(1)}`);
   }
+  for (const t of r.trend) console.log(`       plan at ${t.history}: ${t.plan.join(" > ")}`);
   const b = r.buildView;
   console.log(`\nBuild view: ${b.runs} runs, ${b.quantityValues} values; http ${ms(b.http.median)} ms, bare SQL ${ms(b.bare.median)} ms, ratio ${b.buildRatio.toFixed(2)}`);
   console.log(`  SQL statements per request: ${b.statements.map((s) => `${s.count} (${s.runs} runs)`).join(", ")}`);

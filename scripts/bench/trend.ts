@@ -36,6 +36,8 @@ export interface TrendSize {
   trendRatio: number;
   httpPerPointMs: number;
   barePerPointMs: number;
+  /** Node types of the plan PostgreSQL chose for the bare statement, outermost first. */
+  plan: string[];
 }
 
 /** Bulk path: builds, runs and quantity_values of one series from generate_series in one statement. */
@@ -82,15 +84,28 @@ export async function benchTrend({ sizes, last, repeats, cookie }: { sizes: numb
       const params = [SERIES.case, SERIES.quantity, SERIES.model, branch, SERIES.grid, last];
       const bare = await timeRepeated(() => client.query(BARE_TREND_SQL, params), repeats, 3);
       const returned = Math.max(points, 1);
+      const explained = await client.query<{ "QUERY PLAN": [{ Plan: PlanNode }] }>(`explain (format json) ${BARE_TREND_SQL}`, params);
       out.push({
         history: n, last: points, seedSeconds, http, bare,
         trendRatio: ratio(http.median, bare.median),
         httpPerPointMs: http.median / returned,
         barePerPointMs: bare.median / returned,
+        plan: listNodes(explained.rows[0]["QUERY PLAN"][0].Plan),
       });
     }
   } finally {
     await client.end();
   }
   return out;
+}
+
+interface PlanNode {
+  "Node Type": string;
+  "Index Name"?: string;
+  Plans?: PlanNode[];
+}
+
+function listNodes(node: PlanNode): string[] {
+  const here = node["Index Name"] ? `${node["Node Type"]} (${node["Index Name"]})` : node["Node Type"];
+  return [here, ...(node.Plans ?? []).flatMap(listNodes)];
 }
