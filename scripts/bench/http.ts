@@ -1,4 +1,5 @@
 import { readFileSync } from "node:fs";
+import { signInAt } from "../../tests/helpers/session";
 
 // Talking to the running app as CI and as a signed-in person do.
 
@@ -33,27 +34,8 @@ export function graphQLBody(query: string, variables: Record<string, unknown>): 
 }
 
 /** Signs in through next-auth's credentials endpoint as the form does; returns the cookie header. */
-export async function signIn(email: string): Promise<string> {
-  const base = appUrl();
-  const csrfRes = await fetch(`${base}/api/auth/csrf`);
-  const { csrfToken } = (await csrfRes.json()) as { csrfToken: string };
-  const jar = cookiesOf(csrfRes);
-  const res = await fetch(`${base}/api/auth/callback/credentials`, {
-    method: "POST",
-    redirect: "manual",
-    headers: { "content-type": "application/x-www-form-urlencoded", cookie: jar },
-    body: new URLSearchParams({ csrfToken, email, password: requireEnv("TAULINE_DEMO_PASSWORD"), json: "true" }),
-  });
-  const cookies = cookiesOf(res);
-  if (!/next-auth\.session-token=/.test(cookies)) throw new Error(`sign-in as ${email} failed (${res.status})`);
-  return [jar, cookies].filter(Boolean).join("; ");
-}
-
-function cookiesOf(res: Response): string {
-  return res.headers
-    .getSetCookie()
-    .map((c) => c.split(";")[0])
-    .join("; ");
+export function signIn(email: string): Promise<string> {
+  return signInAt(appUrl(), email, requireEnv("TAULINE_DEMO_PASSWORD"));
 }
 
 /**

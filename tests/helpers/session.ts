@@ -5,7 +5,11 @@ import { requireEnv } from "./env";
  * does (CSRF token first) and returns the session cookie header.
  */
 export async function signIn(email: string, password = requireEnv("TAULINE_DEMO_PASSWORD")): Promise<string> {
-  const base = requireEnv("TAULINE_TEST_URL");
+  return signInAt(requireEnv("TAULINE_TEST_URL"), email, password);
+}
+
+/** The same sign-in against any running app (the bench uses it too). */
+export async function signInAt(base: string, email: string, password: string): Promise<string> {
   const csrfRes = await fetch(`${base}/api/auth/csrf`);
   const { csrfToken } = (await csrfRes.json()) as { csrfToken: string };
   const jar = cookiesOf(csrfRes);
