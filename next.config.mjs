@@ -6,7 +6,7 @@ const nextConfig = {
   reactStrictMode: true,
   poweredByHeader: false,
   // pg and knex load optional drivers dynamically; keep them out of the bundle.
-  serverExternalPackages: ["knex", "pg", "pg-query-stream", "bcryptjs", "nodemailer"],
+  serverExternalPackages: ["knex", "pg", "pg-query-stream", "pg-copy-streams", "bcryptjs", "nodemailer", "pino", "pg-boss"],
   typedRoutes: false,
 };
 

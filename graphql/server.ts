@@ -3,7 +3,9 @@ import { useCSRFPrevention } from "@graphql-yoga/plugin-csrf-prevention";
 import { createYoga, maskError as defaultMaskError, type Plugin } from "graphql-yoga";
 import { getEnv } from "@/lib/env";
 import { AppError, GRAPHQL_CODE, HTTP_STATUS } from "@/lib/errors";
+import { isDatabaseUnavailable } from "@/lib/db-unavailable";
 import { createContext, type GraphQLContext } from "./context";
+import { executionPlugins } from "./plugins/execution";
 import { schema } from "./schema";
 
 const production = process.env.NODE_ENV === "production";
@@ -47,7 +49,7 @@ export const yoga = createYoga<{ request: Request }, GraphQLContext>({
   fetchAPI: { Response },
   graphiql: !production,
   landingPage: false,
-  plugins: [useBodyLimit(), useCSRFPrevention({ requestHeaders: [CSRF_HEADER] })],
+  plugins: [useBodyLimit(), useCSRFPrevention({ requestHeaders: [CSRF_HEADER] }), ...executionPlugins],
   maskedErrors: {
     maskError(error, message, isDev) {
       const original = error instanceof GraphQLError ? error.originalError : error;
@@ -58,7 +60,7 @@ export const yoga = createYoga<{ request: Request }, GraphQLContext>({
           extensions: { code: GRAPHQL_CODE[original.code], http: { status: HTTP_STATUS[original.code] }, issues: original.issues },
         });
       }
-      if (original instanceof Error && /ECONNREFUSED|terminating connection|Connection terminated|the database system is/i.test(original.message)) {
+      if (isDatabaseUnavailable(original)) {
         return new GraphQLError("The database is not reachable; retry shortly.", {
           extensions: { code: "SERVICE_UNAVAILABLE", http: { status: 503, headers: { "Retry-After": "5" } } },
         });
