@@ -1,6 +1,7 @@
 import { createHash, randomBytes } from "node:crypto";
 import bcrypt from "bcryptjs";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { schema } from "@/graphql/schema";
 import { closeTestDb, testDb } from "../helpers/db";
 import { SUBMIT, ciToken, postGraphQL, randomCommit } from "../helpers/graphql";
 import { signIn } from "../helpers/session";
@@ -116,7 +117,30 @@ const OPERATIONS: Operation[] = [
   },
   ...alertOperations(call),
   ...libraryEditOperations(call),
+  // The two placeholders graphql/schema/base.ts declares so that every module can
+  // `extend type Query/Mutation`: a constant string and a field without resolver
+  // (always null). Neither reads nor changes data, so every caller gets them.
+  { name: "_version", allowed: CALLERS, run: (c) => call(c, "{ _version }") },
+  { name: "_noop", allowed: CALLERS, run: (c) => call(c, "mutation { _noop }") },
 ];
+
+describe("role matrix coverage", () => {
+  // Read from the schema module itself, not over HTTP: production turns introspection off.
+  const rootFields = (type: "Query" | "Mutation") => Object.keys((type === "Query" ? schema.getQueryType() : schema.getMutationType())?.getFields() ?? {});
+
+  it("has an entry for every root query and mutation of the schema", () => {
+    const covered = new Set(OPERATIONS.map((op) => op.name));
+    const missing = [...rootFields("Query"), ...rootFields("Mutation")].filter((name) => !covered.has(name));
+    expect(missing).toEqual([]);
+  });
+
+  it("names no operation that the schema does not have (a renamed field would leave a stale entry)", () => {
+    const fields = new Set([...rootFields("Query"), ...rootFields("Mutation")]);
+    // "Type.field" entries check a guarded field below the root (e.g. Build.reevaluations).
+    const stale = OPERATIONS.map((op) => op.name).filter((name) => !name.includes(".") && !fields.has(name));
+    expect(stale).toEqual([]);
+  });
+});
 
 describe("role matrix", () => {
   for (const op of OPERATIONS) {
