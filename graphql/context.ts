@@ -3,6 +3,7 @@ import { GraphQLError } from "graphql";
 import { getDb } from "@/db";
 import { useCiTokenByHash } from "@/db/queries/identities";
 import { getSessionActor } from "@/lib/auth/session";
+import type { RequestNote } from "@/lib/http/request-log";
 import type { Actor } from "@/lib/services/actor";
 import { createLoaders, type Loaders } from "./loaders";
 
@@ -16,11 +17,13 @@ export interface GraphQLContext {
  * person (next-auth session cookie). A bearer header that is malformed, unknown,
  * revoked or expired is refused with 401 before anything runs.
  */
-export async function createContext({ request }: { request: Request }): Promise<GraphQLContext> {
+export async function createContext({ request, note }: { request: Request; note?: RequestNote }): Promise<GraphQLContext> {
   const db = getDb();
   const header = request.headers.get("authorization");
   let actor: Actor | null = null;
   if (header !== null) {
+    // Marked refused first: a throw below leaves it so for the request's log line.
+    if (note) note.actor = "refused";
     const match = /^Bearer\s+([\x21-\x7e]{16,512})$/i.exec(header.trim());
     if (!match) throw unauthenticated("The Authorization header must be `Bearer <CI token>`.");
     const token = await useCiTokenByHash({ db, tokenHash: createHash("sha256").update(match[1], "utf8").digest("hex") });
@@ -29,6 +32,7 @@ export async function createContext({ request }: { request: Request }): Promise<
   } else {
     actor = await getSessionActor();
   }
+  if (note) note.actor = actor ? actor.kind : "anonymous";
   return { actor, loaders: createLoaders(db) };
 }
 

@@ -1,55 +1,44 @@
 import { GraphQLError } from "graphql";
-import { useCSRFPrevention } from "@graphql-yoga/plugin-csrf-prevention";
-import { createYoga, maskError as defaultMaskError, type Plugin } from "graphql-yoga";
-import { getEnv } from "@/lib/env";
+import { createYoga, maskError as defaultMaskError } from "graphql-yoga";
 import { AppError, GRAPHQL_CODE, HTTP_STATUS } from "@/lib/errors";
 import { isDatabaseUnavailable } from "@/lib/db-unavailable";
+import type { RequestNote } from "@/lib/http/request-log";
+import { getLogger } from "@/lib/log";
 import { createContext, type GraphQLContext } from "./context";
+import { documentLimitPlugins } from "./guards/limits";
+import { useRequestGate } from "./guards/request-gate";
+import { useRequestNotes } from "./guards/request-notes";
 import { executionPlugins } from "./plugins/execution";
 import { schema } from "./schema";
 
+export { CSRF_HEADER } from "./guards/request-gate";
+
 const production = process.env.NODE_ENV === "production";
 
-/**
- * The header a browser client must send on requests a cross-site form could also
- * send (multipart/form-data, url-encoded, text/plain, GET). A page on another
- * origin cannot set a custom header without a CORS preflight, which we never
- * grant, so a forged upload riding on the user's cookie is refused with 403.
- * JSON posts (CI curl, Apollo) are preflighted anyway and need nothing extra.
- */
-export const CSRF_HEADER = "x-tauline-request";
-
-/** Refuses a body larger than MAX_BODY_BYTES (plus room for the multipart envelope) before reading it. */
-function useBodyLimit(): Plugin {
-  return {
-    onRequest({ request, endResponse, fetchAPI }) {
-      const declared = Number(request.headers.get("content-length") ?? "0");
-      const limit = getEnv().MAX_BODY_BYTES + 1024 * 1024;
-      if (Number.isFinite(declared) && declared > limit) {
-        const message = `The request body is ${(declared / 2 ** 20).toFixed(1)} MB; the limit is ${(limit / 2 ** 20).toFixed(0)} MB (MAX_BODY_BYTES).`;
-        endResponse(
-          new fetchAPI.Response(JSON.stringify({ errors: [{ message, extensions: { code: "PAYLOAD_TOO_LARGE" } }] }), {
-            status: 413,
-            headers: { "content-type": "application/json" },
-          }),
-        );
-      }
-    },
-  };
+/** What the route hands yoga besides the request: the note for its closing log line. */
+export interface ServerContext {
+  request: Request;
+  note?: RequestNote;
 }
 
 /**
- * The one API for CI and the browser. AppErrors keep their message, code, HTTP
- * status and per-field issues; anything else is masked as an internal error.
+ * The one API for CI and the browser. The request gate (content type, origin,
+ * CSRF header) runs before parsing; the body limit is the route's
+ * (app/api/graphql/route.ts), since it must count the bytes as they stream.
+ * AppErrors keep their message, code, HTTP status and per-field issues;
+ * anything else is logged with its stack and masked as an internal error.
  */
-export const yoga = createYoga<{ request: Request }, GraphQLContext>({
+export const yoga = createYoga<ServerContext, GraphQLContext>({
   schema,
   graphqlEndpoint: "/api/graphql",
   context: createContext,
   fetchAPI: { Response },
   graphiql: !production,
   landingPage: false,
-  plugins: [useBodyLimit(), useCSRFPrevention({ requestHeaders: [CSRF_HEADER] }), ...executionPlugins],
+  // One operation per request: no client of ours batches, and a batch of
+  // thousands of cheap queries would slip past every per-document limit.
+  batching: false,
+  plugins: [useRequestGate(), ...documentLimitPlugins(production), useRequestNotes(), ...executionPlugins],
   maskedErrors: {
     maskError(error, message, isDev) {
       const original = error instanceof GraphQLError ? error.originalError : error;
@@ -61,11 +50,17 @@ export const yoga = createYoga<{ request: Request }, GraphQLContext>({
         });
       }
       if (isDatabaseUnavailable(original)) {
+        getLogger().warn({ err: original }, "database unavailable");
         return new GraphQLError("The database is not reachable; retry shortly.", {
           extensions: { code: "SERVICE_UNAVAILABLE", http: { status: 503, headers: { "Retry-After": "5" } } },
         });
       }
-      return defaultMaskError(error, message, isDev);
+      const masked = defaultMaskError(error, message, isDev);
+      if (masked !== error) {
+        const path = error instanceof GraphQLError ? error.path?.join(".") : undefined;
+        getLogger().error({ err: original ?? error, path }, "masked error");
+      }
+      return masked;
     },
   },
 });
