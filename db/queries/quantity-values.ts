@@ -154,7 +154,15 @@ export interface TrendPointRow {
   band_version: number | null;
 }
 
-/** The newest `last` points of one quantity on a branch, with the band each was judged against. */
+/**
+ * The newest `last` points of one quantity on a branch, oldest first, with the
+ * band each was judged against. The limit sits inside the subquery so the
+ * planner reads exactly `last` entries of quantity_values_trend_idx (its
+ * columns are the five equalities, then the order); builds and bands are
+ * joined per point through LATERAL ... LIMIT 1, which the planner cannot
+ * flatten into a hash join over the whole builds table. The cost follows the
+ * points returned, not the history stored (issue 5, trend_growth).
+ */
 export async function getTrendPoints({
   db,
   caseKey,
@@ -172,27 +180,18 @@ export async function getTrendPoints({
   grid: string;
   last: number;
 }): Promise<TrendPointRow[]> {
-  const rows: TrendPointRow[] = await db("quantity_values as v")
-    .join("builds as b", "b.id", "v.build_id")
-    .leftJoin("bands as d", "d.id", "v.band_id")
-    .where({ "v.case_key": caseKey, "v.quantity_key": quantityKey, "v.model_key": modelKey, "v.branch": branch, "v.grid": grid })
-    .orderBy([{ column: "v.build_received_at", order: "desc" }, { column: "v.build_id", order: "desc" }])
-    .limit(last)
-    .select(
-      "v.build_id",
-      "b.commit",
-      "b.version",
-      "v.build_received_at",
-      "v.value",
-      "v.verdict",
-      "v.drift",
-      "v.drift_reason",
-      "v.band_id",
-      "d.reference",
-      "d.lower",
-      "d.upper",
-      "d.marginal_margin",
-      "d.version as band_version",
-    );
-  return rows.reverse();
+  const result: { rows: TrendPointRow[] } = await db.raw(
+    `select v.build_id, b.commit, b.version, v.build_received_at, v.value, v.verdict, v.drift, v.drift_reason, v.band_id,
+            d.reference, d.lower, d.upper, d.marginal_margin, d.version as band_version
+       from (select build_id, build_received_at, value, verdict, drift, drift_reason, band_id
+               from quantity_values
+              where case_key = ? and quantity_key = ? and model_key = ? and branch = ? and grid = ?
+              order by build_received_at desc, build_id desc
+              limit ?) as v
+      cross join lateral (select commit, version from builds where builds.id = v.build_id limit 1) as b
+       left join lateral (select reference, lower, upper, marginal_margin, version from bands where bands.id = v.band_id limit 1) as d on true
+      order by v.build_received_at, v.build_id`,
+    [caseKey, quantityKey, modelKey, branch, grid, last],
+  );
+  return result.rows;
 }
