@@ -11,18 +11,45 @@ pg.types.setTypeParser(pg.types.builtins.INT8, (v) => {
 });
 
 // One pool per process, kept on globalThis so Next's dev reloads don't open new ones.
-const globalForDb = globalThis as unknown as { taulineDb?: Knex };
+const globalForDb = globalThis as unknown as { taulineDb?: Knex; taulineHealthDb?: Knex };
+
+/**
+ * Connection settings for an outage. A connection that PostgreSQL closed (a
+ * restart, `pg_ctl stop -m immediate`) is flagged by Knex's pg dialect on its
+ * 'error'/'end' event and dropped at the next acquire, so the pool recovers on
+ * its own once the server is back. connectionTimeoutMillis bounds a connect to
+ * a host that does not answer at all (a refused port fails at once anyway);
+ * keepAlive lets the OS notice a peer that vanished without closing.
+ */
+function createPoolConfig(databaseUrl?: string, pool?: Knex.PoolConfig): Knex.Config {
+  const base = createKnexConfig(databaseUrl);
+  return {
+    ...base,
+    connection: { connectionString: String(base.connection), connectionTimeoutMillis: 5_000, keepAlive: true },
+    pool: { ...base.pool, ...pool },
+  };
+}
 
 export function getDb(): Knex {
-  if (!globalForDb.taulineDb) globalForDb.taulineDb = knexFactory(createKnexConfig());
+  if (!globalForDb.taulineDb) globalForDb.taulineDb = knexFactory(createPoolConfig());
   return globalForDb.taulineDb;
 }
 
+/**
+ * A pool of its own for /api/health: whether the database answers must not
+ * depend on a free slot in the application's pool (busy under load, which is
+ * not an outage). Two connections at most, and a short wait for one.
+ */
+export function getHealthDb(): Knex {
+  globalForDb.taulineHealthDb ??= knexFactory({ ...createPoolConfig(undefined, { min: 0, max: 2, idleTimeoutMillis: 60_000 }), acquireConnectionTimeout: 3_000 });
+  return globalForDb.taulineHealthDb;
+}
+
 export async function closeDb(): Promise<void> {
-  if (globalForDb.taulineDb) {
-    await globalForDb.taulineDb.destroy();
-    globalForDb.taulineDb = undefined;
-  }
+  const pools = [globalForDb.taulineDb, globalForDb.taulineHealthDb];
+  globalForDb.taulineDb = undefined;
+  globalForDb.taulineHealthDb = undefined;
+  for (const pool of pools) await pool?.destroy();
 }
 
 export type Db = Knex | Knex.Transaction;

@@ -1,6 +1,7 @@
 import "server-only";
 import PgBoss from "pg-boss";
 import { getEnv } from "@/lib/env";
+import { getLogger } from "@/lib/log";
 import { DELIVER_QUEUE, DELIVER_RETRY, DIGEST_QUEUE, SWEEP_QUEUE } from "./queues";
 
 // One pg-boss per process, on the application's own database in the schema
@@ -16,7 +17,7 @@ async function startBoss(): Promise<PgBoss> {
   const boss = new PgBoss({ connectionString: getEnv().DATABASE_URL, schema: BOSS_SCHEMA, max: 4, application_name: "tauline-jobs" });
   // An error here is a failed poll or maintenance run; pg-boss keeps going and
   // the outbox keeps the mail, so it is logged and not thrown.
-  boss.on("error", (error) => console.error(`[jobs] ${error.message}`));
+  boss.on("error", (error) => getLogger().error({ component: "jobs", err: error.message }, "pg-boss error"));
   await boss.start();
   // 'short': at most one waiting job per outbox row (singleton key); a second
   // nudge for the same row while one waits is dropped by pg-boss.

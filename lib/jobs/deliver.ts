@@ -1,6 +1,7 @@
 import "server-only";
 import { getDb } from "@/db";
 import { claimOutboxMessage, listOverdueOutboxIds, markOutboxFailed, markOutboxSent } from "@/db/queries/outbox";
+import { getLogger } from "@/lib/log";
 import { sendOutboxRow } from "@/lib/mail/transport";
 import { nudgeMailDelivery } from "./nudge";
 import { SEND_LEASE_SECONDS, sweepAfterSeconds } from "./queues";
@@ -22,9 +23,11 @@ export async function deliverOutboxMessage({ outboxId, retryCount = 0 }: { outbo
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);
     await markOutboxFailed({ db, id: row.id, attempt: row.attempts, error: message, retryInSeconds: sweepAfterSeconds(retryCount) });
+    getLogger().warn({ component: "mail", outboxId: row.id, eventKey: row.event_key, attempt: row.attempts, err: message }, "mail not delivered; will retry");
     throw new Error(`outbox row ${row.id}, attempt ${row.attempts}: ${message}`);
   }
-  await markOutboxSent({ db, id: row.id, attempt: row.attempts });
+  const recorded = await markOutboxSent({ db, id: row.id, attempt: row.attempts });
+  getLogger().info({ component: "mail", outboxId: row.id, eventKey: row.event_key, attempt: row.attempts, recorded }, "mail delivered");
   return "sent";
 }
 

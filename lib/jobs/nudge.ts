@@ -1,4 +1,5 @@
 import "server-only";
+import { getLogger } from "@/lib/log";
 import { getBoss } from "./boss";
 import { DELIVER_QUEUE } from "./queues";
 
@@ -14,6 +15,6 @@ export async function nudgeMailDelivery(outboxIds: number[]): Promise<void> {
     const boss = await getBoss();
     for (const id of outboxIds) await boss.send(DELIVER_QUEUE, { outboxId: id }, { singletonKey: `outbox:${id}` });
   } catch (error) {
-    console.error(`[mail] could not queue delivery of outbox rows ${outboxIds.join(", ")}; the sweep will: ${String(error)}`);
+    getLogger().error({ component: "mail", outboxIds, err: String(error) }, "could not queue delivery; the outbox sweep will");
   }
 }

@@ -1,4 +1,5 @@
 import "server-only";
+import { getLogger } from "@/lib/log";
 import { getBoss } from "./boss";
 import { deliverOutboxMessage, sweepOutbox } from "./deliver";
 import { sendPendingDigests } from "./digest";
@@ -9,7 +10,23 @@ import { DELIVER_QUEUE, DIGEST_CRON, DIGEST_QUEUE, SWEEP_CRON, SWEEP_QUEUE } fro
 // them, and the outbox claim makes a row's send happen once even if two jobs
 // for it meet.
 
-const globalForWorker = globalThis as unknown as { taulineMailWorker?: Promise<void> };
+/** Whether this process's mail worker is running, for /api/health. */
+export interface MailWorkerState {
+  state: "starting" | "running" | "retrying";
+  since: string;
+  lastError: string | null;
+}
+
+const globalForWorker = globalThis as unknown as { taulineMailWorker?: Promise<void>; taulineMailWorkerState?: MailWorkerState };
+
+function setWorkerState(state: MailWorkerState["state"], lastError: string | null = null): void {
+  globalForWorker.taulineMailWorkerState = { state, since: new Date().toISOString(), lastError };
+}
+
+/** null when this process never started a worker (a script, or the Edge runtime). */
+export function getMailWorkerState(): MailWorkerState | null {
+  return globalForWorker.taulineMailWorkerState ?? null;
+}
 
 async function registerWorkers(): Promise<void> {
   const boss = await getBoss();
@@ -34,11 +51,20 @@ async function registerWorkers(): Promise<void> {
 /** Starts the worker once per process; a failed start (database not up yet) is logged and tried again in 30 s. */
 export function startMailWorker(): Promise<void> {
   if (!globalForWorker.taulineMailWorker) {
-    globalForWorker.taulineMailWorker = registerWorkers().catch((error: unknown) => {
-      globalForWorker.taulineMailWorker = undefined;
-      console.error(`[mail] the mail worker did not start, trying again in 30 s: ${error instanceof Error ? error.message : String(error)}`);
-      setTimeout(() => void startMailWorker(), 30_000).unref();
-    });
+    if (globalForWorker.taulineMailWorkerState?.state !== "retrying") setWorkerState("starting");
+    globalForWorker.taulineMailWorker = registerWorkers().then(
+      () => {
+        setWorkerState("running");
+        getLogger().info({ component: "mail-worker" }, "mail worker running");
+      },
+      (error: unknown) => {
+        globalForWorker.taulineMailWorker = undefined;
+        const message = error instanceof Error ? error.message : String(error);
+        setWorkerState("retrying", message);
+        getLogger().error({ component: "mail-worker", err: message }, "the mail worker did not start; trying again in 30 s");
+        setTimeout(() => void startMailWorker(), 30_000).unref();
+      },
+    );
   }
   return globalForWorker.taulineMailWorker;
 }

@@ -1,14 +1,45 @@
-import { getDb } from "@/db";
+import { getHealthDb } from "@/db";
+import { getMailHealth } from "@/lib/jobs/health";
 
 export const dynamic = "force-dynamic";
 
-// Liveness and database reachability, for start scripts and load balancers.
-export async function GET() {
-  const started = Date.now();
+// Health for start scripts, load balancers and people.
+//
+//   200 {status:"ok"}        database answers, mail side fine
+//   200 {status:"degraded"}  database answers, but mail is stuck or this
+//                            instance's worker is not running (see mail.problems)
+//   503 {status:"down"}      the database does not answer (Retry-After set)
+//
+// A mail backlog keeps 200 on purpose: every instance shares the same queue, so
+// dropping a web node from the balancer would not send one more message, only
+// stop CI posts and dashboards. Only the database decides availability.
+// The database probe has its own two-connection pool and a 3 s limit; the mail
+// facts are cached for 5 s (lib/jobs/health.ts), so a poll costs one `select 1`.
+
+const PROBE_TIMEOUT_MS = 3_000;
+
+async function probeDatabase(): Promise<{ up: true; latencyMs: number } | { up: false; error: string }> {
+  const started = performance.now();
+  let timer: NodeJS.Timeout | undefined;
+  const timeout = new Promise<never>((_, reject) => {
+    timer = setTimeout(() => reject(new Error(`no answer within ${PROBE_TIMEOUT_MS} ms`)), PROBE_TIMEOUT_MS);
+  });
   try {
-    await getDb().raw("select 1");
-    return Response.json({ status: "ok", database: "up", latencyMs: Date.now() - started });
+    await Promise.race([getHealthDb().raw("select 1"), timeout]);
+    return { up: true, latencyMs: Math.round((performance.now() - started) * 10) / 10 };
   } catch (error) {
-    return Response.json({ status: "degraded", database: "down", error: (error as Error).message.slice(0, 200) }, { status: 503 });
+    return { up: false, error: (error as Error).message.slice(0, 200) };
+  } finally {
+    clearTimeout(timer);
   }
+}
+
+export async function GET() {
+  const db = await probeDatabase();
+  if (!db.up) {
+    return Response.json({ status: "down", database: "down", error: db.error }, { status: 503, headers: { "Retry-After": "5", "Cache-Control": "no-store" } });
+  }
+  const mail = await getMailHealth(getHealthDb()).catch((error: unknown) => ({ error: (error as Error).message.slice(0, 200), problems: ["the mail state could not be read"] }));
+  const status = mail.problems.length ? "degraded" : "ok";
+  return Response.json({ status, database: "up", latencyMs: db.latencyMs, mail }, { headers: { "Cache-Control": "no-store" } });
 }

@@ -1,0 +1,109 @@
+import "server-only";
+import type { Knex } from "knex";
+import { BOSS_SCHEMA } from "./boss";
+import { DELIVER_QUEUE, DIGEST_QUEUE, SWEEP_QUEUE } from "./queues";
+import { getMailWorkerState, type MailWorkerState } from "./worker";
+
+// The mail side of /api/health: is the queue (pg-boss's tables in our own
+// database) readable, how many jobs wait or gave up, how old the oldest unsent
+// outbox row is, and whether this instance's worker runs. Two small queries,
+// cached for a few seconds per process so that a load balancer polling every
+// second, or the bench using /api/health as its bare round trip, costs almost
+// nothing.
+
+const QUEUES = [DELIVER_QUEUE, SWEEP_QUEUE, DIGEST_QUEUE];
+const CACHE_MS = 5_000;
+/** Unsent mail older than this is a backlog worth a look (SMTP down, no worker anywhere). */
+export const MAIL_BACKLOG_SECONDS = 15 * 60;
+
+export interface QueueCounts {
+  waiting: number;
+  active: number;
+  failed: number;
+}
+
+export interface MailHealth {
+  queue: "up" | "down";
+  queueError?: string;
+  jobs: Record<string, QueueCounts>;
+  outbox: { unsent: number; failedAttempts: number; oldestUnsentSeconds: number | null };
+  /** Why the mail side is degraded (empty when it is not). */
+  problems: string[];
+  checkedAt: string;
+}
+
+type MailFacts = Omit<MailHealth, "problems">;
+
+const globalForHealth = globalThis as unknown as { taulineMailHealth?: { at: number; value: Promise<MailFacts> } };
+
+async function readJobCounts(db: Knex): Promise<Record<string, QueueCounts>> {
+  const jobs = Object.fromEntries(QUEUES.map((q) => [q, { waiting: 0, active: 0, failed: 0 }]));
+  const rows: { name: string; state: string; n: number }[] = (
+    await db.raw(
+      `select name, state::text as state, count(*)::int as n from ${BOSS_SCHEMA}.job
+        where name = any(?) and state in ('created','retry','active','failed') group by 1, 2`,
+      [QUEUES],
+    )
+  ).rows;
+  for (const r of rows) {
+    const counts = jobs[r.name];
+    if (r.state === "active") counts.active += r.n;
+    else if (r.state === "failed") counts.failed += r.n;
+    else counts.waiting += r.n;
+  }
+  return jobs;
+}
+
+async function readOutbox(db: Knex): Promise<MailHealth["outbox"]> {
+  const { rows } = await db.raw(
+    `select count(*)::int as unsent, count(*) filter (where status = 'failed')::int as failed,
+            extract(epoch from now() - min(created_at))::float8 as oldest
+       from mail_outbox where status in ('queued', 'sending', 'failed')`,
+  );
+  const r = rows[0] as { unsent: number; failed: number; oldest: number | null };
+  return { unsent: r.unsent, failedAttempts: r.failed, oldestUnsentSeconds: r.oldest === null ? null : Math.round(r.oldest) };
+}
+
+function listProblems(h: MailFacts, worker: MailWorkerState | null): string[] {
+  const problems: string[] = [];
+  if (h.queue === "down") problems.push("the job queue could not be read");
+  if (worker?.state !== "running") problems.push(`the mail worker of this instance is ${worker ? worker.state : "not started"}`);
+  if (h.outbox.oldestUnsentSeconds !== null && h.outbox.oldestUnsentSeconds > MAIL_BACKLOG_SECONDS) problems.push(`mail waits for ${Math.round(h.outbox.oldestUnsentSeconds / 60)} min`);
+  const gaveUp = Object.values(h.jobs).reduce((n, c) => n + c.failed, 0);
+  if (gaveUp > 0) problems.push(`${gaveUp} job(s) ran out of retries`);
+  return problems;
+}
+
+async function checkMail(db: Knex): Promise<MailFacts> {
+  const checkedAt = new Date().toISOString();
+  const outbox = await readOutbox(db);
+  let jobs: Record<string, QueueCounts> = {};
+  let queue: MailHealth["queue"] = "up";
+  let queueError: string | undefined;
+  try {
+    jobs = await readJobCounts(db);
+  } catch (error) {
+    // The pgboss schema is missing or unreadable: mail stays in the outbox, but nothing sends it.
+    queue = "down";
+    queueError = (error as Error).message.slice(0, 200);
+  }
+  return { queue, ...(queueError ? { queueError } : {}), jobs, outbox, checkedAt };
+}
+
+function readCachedFacts(db: Knex): Promise<MailFacts> {
+  const cached = globalForHealth.taulineMailHealth;
+  if (cached && Date.now() - cached.at < CACHE_MS) return cached.value;
+  const value = checkMail(db);
+  globalForHealth.taulineMailHealth = { at: Date.now(), value };
+  // A failed check is not kept: the next call asks the database again.
+  value.catch(() => {
+    if (globalForHealth.taulineMailHealth?.value === value) globalForHealth.taulineMailHealth = undefined;
+  });
+  return value;
+}
+
+/** The mail health: database facts at most CACHE_MS old, this instance's worker state as of now. */
+export async function getMailHealth(db: Knex): Promise<MailHealth> {
+  const facts = await readCachedFacts(db);
+  return { ...facts, problems: listProblems(facts, getMailWorkerState()) };
+}
