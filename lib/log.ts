@@ -12,7 +12,12 @@ interface RequestContext {
   requestId: string;
 }
 
-const requestContext = new AsyncLocalStorage<RequestContext>();
+// Process-wide like the logger below: Next bundles this module more than once
+// (instrumentation, route handlers), and the logger created by one copy must
+// see the request ids set by another.
+const globalForContext = globalThis as unknown as { __taulineRequestContext?: AsyncLocalStorage<RequestContext> };
+globalForContext.__taulineRequestContext ??= new AsyncLocalStorage<RequestContext>();
+const requestContext = globalForContext.__taulineRequestContext;
 
 const REQUEST_ID = /^[A-Za-z0-9._:-]{1,100}$/;
 
