@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { connection } from "next/server";
 import type { ReactNode } from "react";
 import "./globals.css";
 
@@ -7,7 +8,11 @@ export const metadata: Metadata = {
   description: "Release gate for the in-house RANS solver: canonical cases, tolerance bands, trends and decisions.",
 };
 
-export default function RootLayout({ children }: { children: ReactNode }) {
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  // Every page is rendered per request: Next stamps the proxy's per-request CSP
+  // nonce (proxy.ts) on its scripts only while rendering, never into a page
+  // prerendered at build time.
+  await connection();
   return (
     <html lang="en">
       <body className="flex min-h-screen flex-col">
