@@ -25,6 +25,16 @@ const envSchema = z.object({
   TAULINE_CI_TOKEN: z.string().min(16, "must be at least 16 characters").default("tauline-demo-ci-token"),
   TAULINE_DEMO_PASSWORD: z.string().min(8, "must be at least 8 characters").default("cormorant-demo"),
   MAX_BODY_BYTES: z.coerce.number().int().min(1024).default(64 * 1024 * 1024),
+  // Sign-in throttle (lib/auth/sign-in-throttle.ts): attempts per account and failed
+  // attempts per address within one window; TRUST_PROXY=1 keys the address on the
+  // last X-Forwarded-For entry (one reverse proxy in front), else on the connection.
+  SIGNIN_ACCOUNT_LIMIT: z.coerce.number().int().min(1).max(1000).default(5),
+  SIGNIN_ADDRESS_LIMIT: z.coerce.number().int().min(1).max(100_000).default(30),
+  SIGNIN_WINDOW_MINUTES: z.coerce.number().int().min(1).max(24 * 60).default(15),
+  TRUST_PROXY: z
+    .enum(["0", "1"])
+    .default("0")
+    .transform((v) => v === "1"),
 });
 
 export type Env = z.infer<typeof envSchema>;

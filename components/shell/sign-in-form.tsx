@@ -25,7 +25,8 @@ export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
     });
     setPending(false);
     if (!result || result.error) {
-      setError(result?.status === 429 ? "Too many attempts; wait a minute and try again." : "E-mail or password is not right, or the account is inactive.");
+      // A throttled attempt (429) carries the server's own words: which limit, and for how many minutes.
+      setError(result?.status === 429 ? (result.error ?? "Too many attempts; wait a few minutes and try again.") : "E-mail or password is not right, or the account is inactive.");
       return;
     }
     router.replace(callbackUrl);

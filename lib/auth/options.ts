@@ -6,11 +6,17 @@ import { z } from "zod";
 import { getDb } from "@/db";
 import { getUserByEmail } from "@/db/queries/identities";
 import { getEnv } from "@/lib/env";
+import { PEER_HEADER, pickClientAddress } from "./client-address";
+import { installPeerStamp, readStampedPeer } from "./peer-stamp";
+import { countSignInAttempt } from "./sign-in-throttle";
 
 const credentialsSchema = z.object({
   email: z.email().max(320),
   password: z.string().min(1).max(200),
 });
+
+// Normally installed by instrumentation.ts already; this covers a process where it was not.
+installPeerStamp();
 
 let dummyHash: string | undefined;
 function getDummyHash(): string {
@@ -32,14 +38,21 @@ export const authOptions: NextAuthOptions = {
         email: { label: "E-mail", type: "email" },
         password: { label: "Password", type: "password" },
       },
-      async authorize(unsafeInput) {
+      async authorize(unsafeInput, request) {
         const parsed = credentialsSchema.safeParse(unsafeInput);
+        // Counted before the password is checked (lib/auth/sign-in-throttle.ts); a refusal
+        // throws, and next-auth hands its message to the sign-in form.
+        const attempt = await countSignInAttempt({
+          email: parsed.success ? parsed.data.email : null,
+          address: clientAddressOf(request?.headers ?? {}),
+        });
         if (!parsed.success) return null;
         const user = await getUserByEmail({ db: getDb(), email: parsed.data.email });
         // Compare even when the user is unknown so the timing does not reveal which e-mails exist.
         const hash = user?.password_hash ?? getDummyHash();
         const ok = await bcrypt.compare(parsed.data.password, hash);
         if (!user || !ok || !user.active) return null;
+        await attempt.succeeded();
         return { id: String(user.id), email: user.email, name: user.name, role: user.role };
       },
     }),
@@ -64,3 +77,8 @@ export const authOptions: NextAuthOptions = {
     },
   },
 };
+
+function clientAddressOf(headers: Record<string, string | string[] | undefined>): string {
+  const stamp = headers[PEER_HEADER];
+  return pickClientAddress(headers, { trustProxy: getEnv().TRUST_PROXY, peer: readStampedPeer(Array.isArray(stamp) ? stamp[0] : stamp) });
+}
