@@ -3,7 +3,7 @@ import type { Db } from "@/db";
 import { getBuildsByIds } from "@/db/queries/builds";
 import { getLatestDecisionsByBuildIds } from "@/db/queries/gate";
 import { getBandsByIds, getQuantityDefinitions } from "@/db/queries/library";
-import { getQuantityValuesByRunIds } from "@/db/queries/quantity-values";
+import { getRunQuantitiesByRunIds } from "@/db/queries/run-quantities";
 import {
   getCoefficientsByRunIds,
   getGridStudiesByRunIds,
@@ -39,7 +39,7 @@ export function createLoaders(db: Db) {
     build: byId((ids) => getBuildsByIds({ db, ids })),
     run: byId((ids) => getRunsByIds({ db, ids })),
     runsByBuild: groupedBy("build_id", (buildIds) => getRunsByBuildIds({ db, buildIds })),
-    quantityValuesByRun: groupedBy("run_id", (runIds) => getQuantityValuesByRunIds({ db, runIds })),
+    quantitiesByRun: groupedBy("runId", (runIds) => getRunQuantitiesByRunIds({ db, runIds })),
     seriesByRun: groupedBy("run_id", (runIds) => getSeriesByRunIds({ db, runIds })),
     stressesByRun: groupedBy("run_id", (runIds) => getStressesByRunIds({ db, runIds })),
     gridStudyByRun: groupedBy("run_id", (runIds) => getGridStudiesByRunIds({ db, runIds })),

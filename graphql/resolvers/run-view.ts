@@ -1,4 +1,4 @@
-import type { QuantityValueRow } from "@/db/queries/quantity-values";
+import type { RunQuantityRow } from "@/db/queries/run-quantities";
 import type { RunRow } from "@/db/queries/runs";
 import { thinSeries } from "@/components/charts/thin-series";
 import { AppError } from "@/lib/errors";
@@ -23,16 +23,15 @@ export const RunView = {
 };
 
 // The plots say which kind of band (verification or validation, per model or
-// not) a value was judged against, next to its reference and limits.
-const bandOf = (q: QuantityValueRow, ctx: GraphQLContext) => (q.band_id === null ? Promise.resolve(null) : ctx.loaders.band.load(q.band_id));
-
+// not) a value was judged against, next to its reference and limits. The row
+// carries both (db/queries/run-quantities.ts); the role check stays.
 export const QuantityBandView = {
-  async bandKind(q: QuantityValueRow, _: unknown, ctx: GraphQLContext) {
+  bandKind(q: RunQuantityRow, _: unknown, ctx: GraphQLContext) {
     requirePerson(ctx.actor);
-    return (await bandOf(q, ctx))?.kind ?? null;
+    return q.bandKind;
   },
-  async bandModel(q: QuantityValueRow, _: unknown, ctx: GraphQLContext) {
+  bandModel(q: RunQuantityRow, _: unknown, ctx: GraphQLContext) {
     requirePerson(ctx.actor);
-    return (await bandOf(q, ctx))?.modelKey ?? null;
+    return q.bandModel;
   },
 };

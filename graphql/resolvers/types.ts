@@ -1,6 +1,7 @@
 import type { BuildRow } from "@/db/queries/builds";
 import type { GateDecisionRow } from "@/db/queries/gate";
-import type { QuantityValueRow, TrendPointRow } from "@/db/queries/quantity-values";
+import type { TrendPointRow } from "@/db/queries/quantity-values";
+import type { RunQuantityRow } from "@/db/queries/run-quantities";
 import type { RunRow } from "@/db/queries/runs";
 import { deviationFromReference, type Verdict } from "@/lib/analysis";
 import type { BandInForce } from "@/lib/evaluation/types";
@@ -34,40 +35,20 @@ export const Run = {
   case: (r: RunRow) => r.case_key,
   model: (r: RunRow) => r.model_key,
   wallSeconds: (r: RunRow) => r.wall_seconds,
-  quantities: (r: RunRow, _: unknown, ctx: Ctx) => ctx.loaders.quantityValuesByRun.load(r.id),
+  quantities: (r: RunRow, _: unknown, ctx: Ctx) => ctx.loaders.quantitiesByRun.load(r.id),
   series: (r: RunRow, _: unknown, ctx: Ctx) => ctx.loaders.seriesByRun.load(r.id),
   stresses: (r: RunRow, _: unknown, ctx: Ctx) => ctx.loaders.stressesByRun.load(r.id),
   gridStudy: async (r: RunRow, _: unknown, ctx: Ctx) => (await ctx.loaders.gridStudyByRun.load(r.id))[0] ?? null,
   coefficients: (r: RunRow, _: unknown, ctx: Ctx) => ctx.loaders.coefficientsByRun.load(r.id),
 };
 
-const bandOf = (q: QuantityValueRow, ctx: Ctx) => (q.band_id === null ? Promise.resolve(null) : ctx.loaders.band.load(q.band_id));
-const definitionOf = async (q: QuantityValueRow, ctx: Ctx) => (await ctx.loaders.quantityDefinitions.load("all")).find((d) => d.key === q.quantity_key);
-
+// Rows come shaped as the type (db/queries/run-quantities.ts): every field but
+// these is a property read by the default resolver, with no promise per field.
 export const QuantityValue = {
-  key: (q: QuantityValueRow) => q.quantity_key,
-  label: async (q: QuantityValueRow, _: unknown, ctx: Ctx) => (await definitionOf(q, ctx))?.label ?? null,
-  unit: async (q: QuantityValueRow, _: unknown, ctx: Ctx) => (await definitionOf(q, ctx))?.unit ?? null,
-  band: (q: QuantityValueRow, _: unknown, ctx: Ctx) => bandOf(q, ctx),
-  reference: async (q: QuantityValueRow, _: unknown, ctx: Ctx) => (await bandOf(q, ctx))?.reference ?? null,
-  source: async (q: QuantityValueRow, _: unknown, ctx: Ctx) => (await bandOf(q, ctx))?.source ?? null,
-  lower: async (q: QuantityValueRow, _: unknown, ctx: Ctx) => (await bandOf(q, ctx))?.lower ?? null,
-  upper: async (q: QuantityValueRow, _: unknown, ctx: Ctx) => (await bandOf(q, ctx))?.upper ?? null,
-  marginalMargin: async (q: QuantityValueRow, _: unknown, ctx: Ctx) => (await bandOf(q, ctx))?.marginalMargin ?? null,
-  deviation: async (q: QuantityValueRow, _: unknown, ctx: Ctx) => deviation(q, await bandOf(q, ctx))?.absolute ?? null,
-  deviationPct: async (q: QuantityValueRow, _: unknown, ctx: Ctx) => deviation(q, await bandOf(q, ctx))?.relativePct ?? null,
-  baselineValue: (q: QuantityValueRow) => q.baseline_value,
-  baselineDelta: (q: QuantityValueRow) => q.baseline_delta,
-  baselineBuildId: (q: QuantityValueRow) => q.baseline_build_id,
-  driftReason: (q: QuantityValueRow) => q.drift_reason,
-  driftPValue: (q: QuantityValueRow) => q.drift_p_value,
-  driftSlope: (q: QuantityValueRow) => q.drift_slope,
+  band: (q: RunQuantityRow, _: unknown, ctx: Ctx) => (q.bandId === null ? null : ctx.loaders.band.load(q.bandId)),
+  deviation: (q: RunQuantityRow) => deviationFromReference(q.value, q.reference)?.absolute ?? null,
+  deviationPct: (q: RunQuantityRow) => deviationFromReference(q.value, q.reference)?.relativePct ?? null,
 };
-
-function deviation(q: QuantityValueRow, band: BandInForce | null) {
-  if (q.value === null || !band || band.reference === null) return null;
-  return deviationFromReference(q.value, band.reference);
-}
 
 export const Band = {
   case: (b: BandInForce) => b.caseKey,
