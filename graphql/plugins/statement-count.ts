@@ -2,7 +2,7 @@ import { AsyncLocalStorage } from "node:async_hooks";
 import type { Plugin } from "graphql-yoga";
 import type { Knex } from "knex";
 import { getDb } from "@/db";
-import { getLogger } from "@/lib/log";
+import { currentRequestId, getLogger } from "@/lib/log";
 
 // How many SQL statements one GraphQL request sends, written on one log line
 // per request ("graphql statements", with the request id the route's logger
@@ -43,7 +43,9 @@ export function useStatementCount(): Plugin {
         const tally: Tally = { statements: 0 };
         return scope.run(tally, async () => {
           await wrapped();
-          getLogger().info({ statements: tally.statements }, "graphql statements");
+          // The logger's mixin adds the request id too (pino merges both into one key);
+          // named here as well because the test looks the line up by it.
+          getLogger().info({ requestId: currentRequestId(), statements: tally.statements }, "graphql statements");
         });
       },
     },
