@@ -1,5 +1,5 @@
 import { EnvelopArmorPlugin } from "@escape.tech/graphql-armor";
-import type { GraphQLArmorConfig } from "@escape.tech/graphql-armor-types";
+import type { GraphQLArmorConfig, GraphQLArmorRejectCallback } from "@escape.tech/graphql-armor-types";
 import { NoSchemaIntrospectionCustomRule } from "graphql";
 import type { Plugin } from "graphql-yoga";
 
@@ -24,13 +24,23 @@ export const DOCUMENT_LIMITS = {
   maxCost: 5000,
 } as const;
 
+/**
+ * armor throws its refusal out of parse or validate, where yoga would answer it
+ * with 200; marked like this it is a 400, as a client error must be.
+ */
+const answerWith400: GraphQLArmorRejectCallback = (_context, error) => {
+  (error.extensions as Record<string, unknown>).http = { status: 400 };
+  (error.extensions as Record<string, unknown>).code = "GRAPHQL_VALIDATION_FAILED";
+};
+
 export function armorConfig(production: boolean): GraphQLArmorConfig {
+  const refuse = { onReject: [answerWith400] };
   return {
-    maxTokens: { n: DOCUMENT_LIMITS.maxTokens },
-    maxDepth: { n: DOCUMENT_LIMITS.maxDepth, flattenFragments: true },
-    maxAliases: { n: DOCUMENT_LIMITS.maxAliases },
-    maxDirectives: { n: DOCUMENT_LIMITS.maxDirectives },
-    costLimit: { maxCost: DOCUMENT_LIMITS.maxCost, flattenFragments: true },
+    maxTokens: { n: DOCUMENT_LIMITS.maxTokens, ...refuse },
+    maxDepth: { n: DOCUMENT_LIMITS.maxDepth, flattenFragments: true, ...refuse },
+    maxAliases: { n: DOCUMENT_LIMITS.maxAliases, ...refuse },
+    maxDirectives: { n: DOCUMENT_LIMITS.maxDirectives, ...refuse },
+    costLimit: { maxCost: DOCUMENT_LIMITS.maxCost, flattenFragments: true, ...refuse },
     // "Did you mean …?" hints map the schema for someone who may not read it;
     // developers keep them locally.
     blockFieldSuggestion: { enabled: production },
