@@ -2,6 +2,7 @@ import "server-only";
 import type { Db } from "../index";
 import type { Verdict } from "@/lib/analysis";
 import type { JudgedQuantity } from "@/lib/evaluation/types";
+import { arrayBinding } from "./array-binding";
 
 export interface QuantityValueRow {
   id: number;
@@ -27,39 +28,52 @@ export interface QuantityValueRow {
   details: Record<string, unknown>;
 }
 
+/**
+ * Stores the judged quantities of every run of a submission in one statement
+ * (one array per column, unnested by PostgreSQL): thousands of rows in a large
+ * build, without one INSERT per run or the bind-parameter limit of a VALUES list.
+ */
 export async function insertQuantityValues({
   db,
-  run,
-  quantities,
+  build,
+  runs,
 }: {
   db: Db;
-  run: { id: number; buildId: number; caseKey: string; modelKey: string; grid: string; branch: string; buildReceivedAt: Date };
-  quantities: JudgedQuantity[];
+  build: { id: number; branch: string; receivedAt: Date };
+  runs: readonly { run: { id: number; caseKey: string; modelKey: string; grid: string }; quantities: readonly JudgedQuantity[] }[];
 }) {
-  if (quantities.length === 0) return;
-  await db("quantity_values").insert(
-    quantities.map((q) => ({
-      run_id: run.id,
-      build_id: run.buildId,
-      case_key: run.caseKey,
-      model_key: run.modelKey,
-      grid: run.grid,
-      branch: run.branch,
-      build_received_at: run.buildReceivedAt,
-      quantity_key: q.key,
-      value: q.value,
-      origin: q.origin,
-      band_id: q.band?.id ?? null,
-      verdict: q.verdict,
-      baseline_build_id: q.baselineBuildId,
-      baseline_value: q.baselineValue,
-      baseline_delta: q.baselineDelta,
-      drift: q.drift,
-      drift_reason: q.driftReason,
-      drift_p_value: q.driftPValue,
-      drift_slope: q.driftSlope,
-      details: JSON.stringify(q.details),
-    })),
+  const rows = runs.flatMap(({ run, quantities }) => quantities.map((q) => ({ run, q })));
+  if (rows.length === 0) return;
+  const column = (pick: (r: (typeof rows)[number]) => string | number | boolean | null) => arrayBinding(rows.map(pick));
+  await db.raw(
+    `insert into quantity_values (build_id, branch, build_received_at, run_id, case_key, model_key, grid, quantity_key, value, origin,
+       band_id, verdict, baseline_build_id, baseline_value, baseline_delta, drift, drift_reason, drift_p_value, drift_slope, details)
+     select ?::bigint, ?::text, ?::timestamptz, r, c, m, g, k, v, o, b, vd, bb, bv, bd, d, dr, dp, ds, dt::jsonb
+       from unnest(?::bigint[], ?::text[], ?::text[], ?::text[], ?::text[], ?::float8[], ?::text[], ?::bigint[], ?::text[],
+                   ?::bigint[], ?::float8[], ?::float8[], ?::boolean[], ?::text[], ?::float8[], ?::float8[], ?::text[])
+         as u(r, c, m, g, k, v, o, b, vd, bb, bv, bd, d, dr, dp, ds, dt)`,
+    [
+      build.id,
+      build.branch,
+      build.receivedAt,
+      column((r) => r.run.id),
+      column((r) => r.run.caseKey),
+      column((r) => r.run.modelKey),
+      column((r) => r.run.grid),
+      column((r) => r.q.key),
+      column((r) => r.q.value),
+      column((r) => r.q.origin),
+      column((r) => r.q.band?.id ?? null),
+      column((r) => r.q.verdict),
+      column((r) => r.q.baselineBuildId),
+      column((r) => r.q.baselineValue),
+      column((r) => r.q.baselineDelta),
+      column((r) => r.q.drift),
+      column((r) => r.q.driftReason),
+      column((r) => r.q.driftPValue),
+      column((r) => r.q.driftSlope),
+      column((r) => JSON.stringify(r.q.details)),
+    ],
   );
 }
 
@@ -77,59 +91,51 @@ export async function getValuesOfBuild({ db, buildId }: { db: Db; buildId: numbe
 }
 
 /**
- * The last `perKey` non-null values on a branch before a time for each run key
- * (case, model, grid) of a submission, oldest first — the history drift is judged on.
+ * The last `perKey` non-null values on a branch before a time for each
+ * (case, model, grid, quantity) of a submission, oldest first — the history drift
+ * is judged on. One LATERAL probe per key walks the trend index
+ * (quantity_values_trend_idx) from the newest point down and stops after
+ * `perKey` rows, so the cost follows the keys posted, not the history stored.
  */
 export async function getRecentValues({
   db,
   branch,
   before,
-  runKeys,
+  keys,
   perKey,
 }: {
   db: Db;
   branch: string;
   before: Date;
-  runKeys: { caseKey: string; modelKey: string; grid: string }[];
+  keys: readonly { caseKey: string; modelKey: string; grid: string; quantityKey: string }[];
   perKey: number;
 }): Promise<Map<string, number[]>> {
   const out = new Map<string, number[]>();
-  if (runKeys.length === 0) return out;
-  const rows: { case_key: string; model_key: string; grid: string; quantity_key: string; value: number }[] = await db
-    .select("case_key", "model_key", "grid", "quantity_key", "value")
-    .from(
-      db("quantity_values as v")
-        .join(
-          db.raw(
-            `(select * from unnest(?::text[], ?::text[], ?::text[]) as k(case_key, model_key, grid)) as k`,
-            [runKeys.map((r) => r.caseKey), runKeys.map((r) => r.modelKey), runKeys.map((r) => r.grid)],
-          ),
-          (j) => j.on("k.case_key", "v.case_key").andOn("k.model_key", "v.model_key").andOn("k.grid", "v.grid"),
-        )
-        .where("v.branch", branch)
-        .where("v.build_received_at", "<", before)
-        .whereNotNull("v.value")
-        .select(
-          "v.case_key",
-          "v.model_key",
-          "v.grid",
-          "v.quantity_key",
-          "v.value",
-          "v.build_received_at",
-          db.raw(
-            "row_number() over (partition by v.case_key, v.model_key, v.grid, v.quantity_key order by v.build_received_at desc, v.build_id desc) as rn",
-          ),
-        )
-        .as("h"),
-    )
-    .where("rn", "<=", perKey)
-    .orderBy([{ column: "build_received_at", order: "asc" }]);
-  for (const r of rows) {
-    const key = seriesKey(r.case_key, r.model_key, r.grid, r.quantity_key);
-    const list = out.get(key) ?? [];
-    list.push(r.value);
-    out.set(key, list);
-  }
+  if (keys.length === 0) return out;
+  const result: { rows: { case_key: string; model_key: string; grid: string; quantity_key: string; values: number[] }[] } = await db.raw(
+    `select k.case_key, k.model_key, k.grid, k.quantity_key, h.values
+       from unnest(?::text[], ?::text[], ?::text[], ?::text[]) as k(case_key, model_key, grid, quantity_key)
+       cross join lateral (
+         select array_agg(p.value order by p.build_received_at, p.build_id) as values
+           from (select v.value, v.build_received_at, v.build_id
+                   from quantity_values v
+                  where v.case_key = k.case_key and v.quantity_key = k.quantity_key and v.model_key = k.model_key
+                    and v.branch = ? and v.grid = k.grid and v.build_received_at < ? and v.value is not null
+                  order by v.build_received_at desc, v.build_id desc
+                  limit ?) as p
+       ) as h
+      where h.values is not null`,
+    [
+      keys.map((k) => k.caseKey),
+      keys.map((k) => k.modelKey),
+      keys.map((k) => k.grid),
+      keys.map((k) => k.quantityKey),
+      branch,
+      before,
+      perKey,
+    ],
+  );
+  for (const r of result.rows) out.set(seriesKey(r.case_key, r.model_key, r.grid, r.quantity_key), r.values.map(Number));
   return out;
 }
 

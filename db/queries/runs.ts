@@ -1,8 +1,8 @@
 import "server-only";
 import type { Db } from "../index";
 import type { Verdict } from "@/lib/analysis";
-import type { GridStudyAnalysis, StressAnalysis } from "@/lib/evaluation/derive";
 import type { RunSubmission } from "@/lib/validation/submission";
+import { arrayBinding } from "./array-binding";
 
 export interface RunRow {
   id: number;
@@ -17,89 +17,54 @@ export interface RunRow {
   received_at: Date;
 }
 
-/** Removes an earlier post of the same case × model × grid in this build (its data cascades). */
-export async function deleteRunByKey({ db, buildId, run }: { db: Db; buildId: number; run: Pick<RunSubmission, "case" | "model" | "grid"> }) {
-  await db("runs").where({ build_id: buildId, case_key: run.case, model_key: run.model, grid: run.grid }).delete();
+/** A run as the ingest stores it, judged already. */
+export interface NewRun {
+  case: string;
+  model: string;
+  grid: string;
+  status: RunSubmission["status"];
+  iterations: number | null;
+  wallSeconds: number | null;
+  verdict: Verdict;
 }
 
-export async function insertRun({ db, buildId, run, verdict }: { db: Db; buildId: number; run: RunSubmission; verdict: Verdict }): Promise<number> {
-  const [{ id }] = await db("runs")
-    .insert({
-      build_id: buildId,
-      case_key: run.case,
-      model_key: run.model,
-      grid: run.grid,
-      status: run.status,
-      iterations: run.iterations ?? null,
-      wall_seconds: run.wallSeconds ?? null,
-      verdict,
-    })
-    .returning("id");
-  return id;
+/**
+ * Removes earlier posts of these case × model × grid keys in this build (their
+ * data cascades): one statement for the whole submission, not one per run.
+ */
+export async function deleteRunsByKeys({ db, buildId, runs }: { db: Db; buildId: number; runs: readonly Pick<NewRun, "case" | "model" | "grid">[] }) {
+  if (runs.length === 0) return;
+  await db.raw(
+    `delete from runs r using unnest(?::text[], ?::text[], ?::text[]) as k(case_key, model_key, grid)
+      where r.build_id = ? and r.case_key = k.case_key and r.model_key = k.model_key and r.grid = k.grid`,
+    [runs.map((r) => r.case), runs.map((r) => r.model), runs.map((r) => r.grid), buildId],
+  );
 }
 
-export async function insertRunData({
-  db,
-  runId,
-  run,
-  stresses,
-  gridStudy,
-}: {
-  db: Db;
-  runId: number;
-  run: RunSubmission;
-  stresses: StressAnalysis[];
-  gridStudy: GridStudyAnalysis | null;
-}) {
-  if (run.series?.length) {
-    await db("run_series").insert(run.series.map((s) => ({ run_id: runId, key: s.key, x: s.x, y: s.y })));
-  }
-  if (run.stresses?.length) {
-    const rows = run.stresses.map((s, idx) => {
-      const a = stresses[idx];
-      return {
-        run_id: runId,
-        idx,
-        at: s.at,
-        uu: s.uu,
-        vv: s.vv,
-        ww: s.ww,
-        uv: s.uv,
-        uw: s.uw,
-        vw: s.vw,
-        k: a.k,
-        ii: finite(a.ii),
-        iii: finite(a.iii),
-        eta: finite(a.eta),
-        xi: finite(a.xi),
-        lumley_f: finite(a.f),
-        bary_x: finite(a.barycentric?.x),
-        bary_y: finite(a.barycentric?.y),
-        realizable: a.realizable,
-        violations: a.violations,
-      };
-    });
-    for (let i = 0; i < rows.length; i += 2000) await db("stress_samples").insert(rows.slice(i, i + 2000));
-  }
-  if (run.gridStudy && gridStudy) {
-    await db("grid_studies").insert({
-      run_id: runId,
-      quantity: run.gridStudy.quantity,
-      cells: run.gridStudy.cells,
-      values: run.gridStudy.values,
-      dimension: run.gridStudy.dimension,
-      convergence: gridStudy.convergence,
-      observed_order: finite(gridStudy.p),
-      extrapolated_value: finite(gridStudy.extrapolated),
-      gci_fine_pct: finite(gridStudy.gciFinePct),
-      ea_pct: finite(gridStudy.eaPct),
-      eext_pct: finite(gridStudy.eextPct),
-    });
-  }
-  if (run.coefficients?.length) {
-    await db("run_coefficients").insert(run.coefficients.map((c) => ({ run_id: runId, name: c.name, value: c.value })));
-  }
+/** Inserts every run of a submission in one statement; returns their ids in the order given. */
+export async function insertRuns({ db, buildId, runs }: { db: Db; buildId: number; runs: readonly NewRun[] }): Promise<number[]> {
+  if (runs.length === 0) return [];
+  const result: { rows: { id: number; case_key: string; model_key: string; grid: string }[] } = await db.raw(
+    `insert into runs (build_id, case_key, model_key, grid, status, iterations, wall_seconds, verdict)
+     select ?::bigint, * from unnest(?::text[], ?::text[], ?::text[], ?::text[], ?::int[], ?::float8[], ?::text[])
+     returning id, case_key, model_key, grid`,
+    [
+      buildId,
+      runs.map((r) => r.case),
+      runs.map((r) => r.model),
+      runs.map((r) => r.grid),
+      runs.map((r) => r.status),
+      arrayBinding(runs.map((r) => r.iterations)),
+      arrayBinding(runs.map((r) => r.wallSeconds)),
+      runs.map((r) => r.verdict),
+    ],
+  );
+  // RETURNING order is not promised by SQL: match rows to runs by their unique key.
+  const ids = new Map(result.rows.map((r) => [runKey(r.case_key, r.model_key, r.grid), Number(r.id)]));
+  return runs.map((r) => ids.get(runKey(r.case, r.model, r.grid))!);
 }
+
+const runKey = (caseKey: string, model: string, grid: string) => `${caseKey}|${model}|${grid}`;
 
 export async function getRunsByIds({ db, ids }: { db: Db; ids: readonly number[] }): Promise<RunRow[]> {
   if (ids.length === 0) return [];
@@ -132,8 +97,4 @@ export async function getGridStudiesByRunIds({ db, runIds }: { db: Db; runIds: r
 export async function getCoefficientsByRunIds({ db, runIds }: { db: Db; runIds: readonly number[] }) {
   if (runIds.length === 0) return [];
   return db("run_coefficients").whereIn("run_id", runIds as number[]).orderBy(["run_id", "name"]).select("*");
-}
-
-function finite(v: number | null | undefined): number | null {
-  return typeof v === "number" && Number.isFinite(v) ? v : null;
 }

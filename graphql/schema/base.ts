@@ -3,6 +3,8 @@
 export const baseTypeDefs = /* GraphQL */ `
   scalar DateTime
   scalar JSON
+  "A list of numbers (a profile's x or y), sent as a JSON array of numbers; checked in one pass by the server."
+  scalar FloatSeries
 
   enum Verdict {
     within

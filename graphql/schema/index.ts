@@ -11,7 +11,7 @@ import { Mutation } from "../resolvers/mutations";
 import { overviewResolvers } from "../resolvers/overview";
 import { Query } from "../resolvers/queries";
 import { QuantityBandView, RunView } from "../resolvers/run-view";
-import { DateTime, JSONScalar } from "../resolvers/scalars";
+import { DateTime, FloatSeries, JSONScalar } from "../resolvers/scalars";
 import { trendsResolvers } from "../resolvers/trends";
 import * as types from "../resolvers/types";
 import { adminTypeDefs } from "./admin";
@@ -32,5 +32,5 @@ import { trendsTypeDefs } from "./trends";
 export const schema = createSchema<GraphQLContext>({
   typeDefs: [baseTypeDefs, submissionTypeDefs, buildsTypeDefs, libraryTypeDefs, bandsTypeDefs, buildsViewTypeDefs, overviewTypeDefs, trendsTypeDefs, caseLibraryTypeDefs, runViewTypeDefs, gateTypeDefs, adminTypeDefs, libraryEditTypeDefs, alertsTypeDefs],
   // Resolver maps merge field by field (graphql-tools), so screen modules add Query fields and types.
-  resolvers: [{ DateTime, JSON: JSONScalar, Query, Mutation: { ...Mutation, ...bandMutations }, ...types }, overviewResolvers, trendsResolvers, caseLibraryResolvers, buildsViewResolvers, { Run: RunView, QuantityValue: QuantityBandView }, gateResolvers, adminResolvers, libraryEditResolvers, alertsResolvers],
+  resolvers: [{ DateTime, JSON: JSONScalar, FloatSeries, Query, Mutation: { ...Mutation, ...bandMutations }, ...types }, overviewResolvers, trendsResolvers, caseLibraryResolvers, buildsViewResolvers, { Run: RunView, QuantityValue: QuantityBandView }, gateResolvers, adminResolvers, libraryEditResolvers, alertsResolvers],
 });

@@ -1,5 +1,6 @@
-// The public CI contract (DESIGN.md). Arrays of numbers are plain [Float!]! so
-// that any CI system can post JSON with curl.
+// The public CI contract (DESIGN.md). Arrays of numbers are plain JSON arrays so
+// that any CI system can post JSON with curl; profiles use the FloatSeries scalar
+// (same wire format as [Float!]!, checked in one pass instead of per element).
 export const submissionTypeDefs = /* GraphQL */ `
   input BuildInput {
     solver: String!
@@ -16,8 +17,8 @@ export const submissionTypeDefs = /* GraphQL */ `
 
   input SeriesInput {
     key: String!
-    x: [Float!]!
-    y: [Float!]!
+    x: FloatSeries!
+    y: FloatSeries!
   }
 
   input StressSampleInput {

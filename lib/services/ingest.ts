@@ -3,16 +3,16 @@ import { getDb } from "@/db";
 import { insertAuditEntry } from "@/db/queries/audit";
 import { getBaselineBuild, setBuildVerdict, upsertBuildForUpdate } from "@/db/queries/builds";
 import { getBandsInForce, getCases, getModelKeys, type CaseRow } from "@/db/queries/library";
-import { getRecentValues, getValuesOfBuild, insertQuantityValues, seriesKey } from "@/db/queries/quantity-values";
-import { deleteRunByKey, insertRun, insertRunData } from "@/db/queries/runs";
+import { getRecentValues, getValuesOfBuild } from "@/db/queries/quantity-values";
 import { deriveRunQuantities, type RunDerivation } from "@/lib/evaluation/derive";
-import { DRIFT_WINDOW, judgeRun } from "@/lib/evaluation/judge";
+import { DRIFT_WINDOW } from "@/lib/evaluation/judge";
 import type { BandInForce, FitSettings } from "@/lib/evaluation/types";
 import { AppError, formatPath, type FieldIssue } from "@/lib/errors";
 import { submissionSchema, type ResultSubmission, type RunSubmission } from "@/lib/validation/submission";
 import { actorUserId, type Actor } from "./actor";
 import { recordAlertsForSubmission, sendQueuedAlerts } from "./alerts";
 import { requireSubmitter } from "./authorize";
+import { storeRuns } from "./ingest-store";
 
 export interface SubmissionResult {
   buildId: number;
@@ -63,24 +63,18 @@ export async function submitResults({
       db: trx,
       branch: build.branch,
       before: build.received_at,
-      runKeys: input.runs.map((r) => ({ caseKey: r.case, modelKey: r.model, grid: r.grid })),
+      keys: judgedKeys(input.runs, derived, bands),
       perKey: DRIFT_WINDOW - 1,
     });
 
-    const runIds: number[] = [];
-    for (let i = 0; i < input.runs.length; i++) {
-      const run = input.runs[i];
-      runIds.push(
-        await storeRun(trx, {
-          build,
-          run,
-          derivation: derived[i],
-          bands: bandsForRun(run, bands),
-          baseline: baseline ? { buildId: baseline.id, values: baselineValues } : null,
-          history,
-        }),
-      );
-    }
+    const runIds = await storeRuns(trx, {
+      build,
+      runs: input.runs,
+      derived,
+      bandsFor: (run) => bandsForRun(run, bands),
+      baseline: baseline ? { buildId: baseline.id, values: baselineValues } : null,
+      history,
+    });
 
     const verdict = await setBuildVerdict({ db: trx, buildId: build.id });
     const alerts = await recordAlertsForSubmission(trx, { buildId: build.id, backdated: receivedAt !== undefined });
@@ -147,38 +141,16 @@ function settingsLookup(run: RunSubmission, caseRow: CaseRow, bands: BandInForce
   return (key: string): FitSettings => ({ ...caseRow.parameters, ...(own.get(key)?.fitSettings ?? {}) });
 }
 
-async function storeRun(
-  trx: Parameters<Parameters<ReturnType<typeof getDb>["transaction"]>[0]>[0],
-  ctx: {
-    build: { id: number; branch: string; received_at: Date };
-    run: RunSubmission;
-    derivation: RunDerivation;
-    bands: Map<string, BandInForce>;
-    baseline: { buildId: number; values: Map<string, number | null> } | null;
-    history: Map<string, number[]>;
-  },
-): Promise<number> {
-  const { build, run, derivation, bands, baseline, history } = ctx;
-  const key = (q: string) => seriesKey(run.case, run.model, run.grid, q);
-  const judged = judgeRun({
-    status: run.status,
-    quantities: derivation.quantities,
-    bandFor: (q) => bands.get(q) ?? null,
-    expectedKeys: [...bands.keys()],
-    baseline: baseline && {
-      buildId: baseline.buildId,
-      values: new Map([...bands.keys(), ...derivation.quantities.map((q) => q.key)].map((q) => [q, baseline.values.get(key(q)) ?? null])),
-    },
-    history: (q) => history.get(key(q)) ?? [],
+/**
+ * The (case, model, grid, quantity) keys whose history the judging reads: drift
+ * is judged only for a value that has a band (the band gives the noise floor),
+ * so reported scalars without a band need no history lookup.
+ */
+function judgedKeys(runs: RunSubmission[], derived: RunDerivation[], bands: BandInForce[]) {
+  return runs.flatMap((run, i) => {
+    const banded = bandsForRun(run, bands);
+    return derived[i].quantities
+      .filter((q) => q.value !== null && banded.has(q.key))
+      .map((q) => ({ caseKey: run.case, modelKey: run.model, grid: run.grid, quantityKey: q.key }));
   });
-
-  await deleteRunByKey({ db: trx, buildId: build.id, run });
-  const runId = await insertRun({ db: trx, buildId: build.id, run, verdict: judged.verdict });
-  await insertRunData({ db: trx, runId, run, stresses: derivation.stresses, gridStudy: derivation.gridStudy });
-  await insertQuantityValues({
-    db: trx,
-    run: { id: runId, buildId: build.id, caseKey: run.case, modelKey: run.model, grid: run.grid, branch: build.branch, buildReceivedAt: build.received_at },
-    quantities: judged.quantities,
-  });
-  return runId;
 }

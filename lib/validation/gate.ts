@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { branchName } from "./names";
 
 // Inputs of the release gate, shared by the forms (checked in the browser before
 // sending) and the services (checked again on the server).
@@ -15,7 +16,8 @@ export const idSchema = z
 
 const slug = z.string().trim().min(1, "must not be empty").max(64).regex(/^[a-z0-9][a-z0-9-]*$/, "must be lower-case letters, digits and dashes");
 const quantityKey = z.string().trim().min(1, "must not be empty").max(64).regex(/^[A-Za-z][A-Za-z0-9_]*$/, "must be a quantity key");
-export const branchSchema = z.string().trim().min(1, "must not be empty").max(200).regex(/^[A-Za-z0-9._\/-]+$/, "must be a branch name (letters, digits, . _ / -)");
+// Any branch a build can be posted on (git's ref rules, lib/validation/names.ts).
+export const branchSchema = branchName;
 
 export const decisionStates = ["approved", "held", "rejected"] as const;
 export type DecisionState = (typeof decisionStates)[number];

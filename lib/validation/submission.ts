@@ -1,43 +1,39 @@
 import { z } from "zod";
-import { finiteNumber, numberArray } from "./numbers";
+import { SUBMISSION_LIMITS } from "./limits";
+import { branchName, label } from "./names";
+import { findNumberArrayIssue, finiteNumber } from "./numbers";
 
 // The CI contract (DESIGN.md, "Public CI contract"), checked at the boundary.
-// GraphQL has already checked the types; this adds the physics and sanity rules.
+// GraphQL has already checked the types of scalars; series arrive unchecked from
+// the FloatSeries scalar and are checked here in one pass per array. This adds
+// the physics and sanity rules. Every string has a maximum length, checked first.
 
-export const SUBMISSION_LIMITS = {
-  runs: 5000,
-  quantitiesPerRun: 1000,
-  seriesPerRun: 50,
-  pointsPerSeries: 1_000_000,
-  stressSamplesPerRun: 100_000,
-  coefficientsPerRun: 500,
-} as const;
+export { SUBMISSION_LIMITS };
 
 const slug = z
   .string()
+  .max(64, "must be at most 64 characters")
   .trim()
   .min(1, "must not be empty")
-  .max(64, "must be at most 64 characters")
   .regex(/^[a-z0-9][a-z0-9-]*$/, "must be lower-case letters, digits and dashes");
 
 const quantityKey = z
   .string()
+  .max(64, "must be at most 64 characters")
   .trim()
   .min(1, "must not be empty")
-  .max(64, "must be at most 64 characters")
   .regex(/^[A-Za-z][A-Za-z0-9_]*$/, "must start with a letter and hold only letters, digits and underscores");
-
-const label = (max: number) => z.string().trim().min(1, "must not be empty").max(max, `must be at most ${max} characters`);
 
 export const buildInputSchema = z.object({
   solver: label(100),
   version: label(100),
   commit: z
     .string()
+    .max(64, "must be a commit hash of 7 to 64 hexadecimal digits")
     .trim()
     .regex(/^[0-9a-fA-F]{7,64}$/, "must be a commit hash of 7 to 64 hexadecimal digits")
     .transform((s) => s.toLowerCase()),
-  branch: label(200).regex(/^[A-Za-z0-9._\/-]+$/, "must be a branch name (letters, digits, . _ / -)"),
+  branch: branchName,
   pipelineUrl: z
     .url({ protocol: /^https?$/, error: "must be an http(s) URL" })
     .max(2000, "must be at most 2000 characters")
@@ -53,17 +49,22 @@ const SERIES_RULES: Record<string, { x: { positive?: boolean; strictlyIncreasing
 };
 
 const seriesSchema = z
-  .object({ key: quantityKey, x: z.array(z.unknown()), y: z.array(z.unknown()) })
+  .object({ key: quantityKey, x: z.unknown(), y: z.unknown() })
   .superRefine((s, ctx) => {
     const rules = SERIES_RULES[s.key] ?? { x: {}, y: {} };
-    const max = SUBMISSION_LIMITS.pointsPerSeries;
     for (const axis of ["x", "y"] as const) {
-      const parsed = numberArray({ maxLength: max, ...rules[axis] }).safeParse(s[axis]);
-      if (!parsed.success) {
-        for (const issue of parsed.error.issues) ctx.addIssue({ code: "custom", path: [axis, ...issue.path], message: issue.message });
+      const values = s[axis];
+      if (!Array.isArray(values)) {
+        ctx.addIssue({ code: "custom", path: [axis], message: "must be a list of numbers" });
+        return;
+      }
+      const issue = findNumberArrayIssue(values, { maxLength: SUBMISSION_LIMITS.pointsPerSeries, ...rules[axis] });
+      if (issue) {
+        ctx.addIssue({ code: "custom", path: issue.index === null ? [axis] : [axis, issue.index], message: issue.message });
         return;
       }
     }
+    if (!Array.isArray(s.x) || !Array.isArray(s.y)) return;
     if (s.x.length !== s.y.length) {
       ctx.addIssue({ code: "custom", path: ["y"], message: `has ${s.y.length} values but x has ${s.x.length}; they must match` });
     }

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { branchName } from "./names";
 
 // One alert subscription as the settings form and the GraphQL mutation send it.
 // An empty case or branch means "every case" / "every branch".
@@ -12,7 +13,7 @@ export const subscriptionInputSchema = z.object({
   ),
   branch: z.preprocess(
     emptyToNull,
-    z.string().trim().max(200, "must be at most 200 characters").regex(/^[A-Za-z0-9._\/-]+$/, "must be a branch name (letters, digits, . _ / -)").nullable().default(null),
+    branchName.nullable().default(null),
   ),
   mode: z.enum(["immediate", "digest"], { error: "must be immediate or digest" }),
 });

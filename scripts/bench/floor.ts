@@ -1,4 +1,8 @@
+import { Readable } from "node:stream";
+import { pipeline } from "node:stream/promises";
 import type { Client } from "pg";
+import { from as copyFrom } from "pg-copy-streams";
+import { encodeSeriesCopy } from "@/db/queries/series-copy";
 import { deriveRunQuantities } from "@/lib/evaluation/derive";
 import type { FitSettings } from "@/lib/evaluation/types";
 import type { RunSubmission } from "@/lib/validation/submission";
@@ -6,8 +10,9 @@ import type { RunSubmission } from "@/lib/validation/submission";
 // The ingest floor of issue 5: parse the very JSON the endpoint receives, run
 // the same lib/analysis derivations (deriveRunQuantities), and write the same
 // rows (build, runs, run_series as float8[], run_coefficients, quantity_values)
-// in one transaction with multi-row inserts. No GraphQL, no zod, no judging
-// against bands (every value is stored 'unbanded').
+// in one transaction with the fastest path the schema allows: series by binary
+// COPY (the same encoder the endpoint uses), the rest by multi-row inserts.
+// No GraphQL, no zod, no judging against bands (every value is stored 'unbanded').
 
 // PostgreSQL allows at most 65,535 bind parameters per statement.
 const MAX_PARAMS = 60_000;
@@ -31,8 +36,8 @@ export async function writeFloorSubmission(client: Client, body: string, caseSet
     const runRows = runs.map((r) => [buildId, r.case, r.model, r.grid ?? "default", r.status, r.iterations ?? null, r.wallSeconds ?? null, "unbanded"]);
     const runIds = (await insertRows<{ id: string }>(client, "runs (build_id, case_key, model_key, grid, status, iterations, wall_seconds, verdict)", runRows, "returning id")).map((r) => r.id);
 
-    const seriesRows = runs.flatMap((r, i) => (r.series ?? []).map((s) => [runIds[i], s.key, s.x, s.y]));
-    await insertRows(client, "run_series (run_id, key, x, y)", seriesRows);
+    const seriesRows = runs.flatMap((r, i) => (r.series ?? []).map((s) => ({ runId: Number(runIds[i]), key: s.key, x: s.x, y: s.y })));
+    await pipeline(Readable.from(encodeSeriesCopy(seriesRows)), client.query(copyFrom("COPY run_series (run_id, key, x, y) FROM STDIN (FORMAT binary)")));
     const coefficientRows = runs.flatMap((r, i) => (r.coefficients ?? []).map((c) => [runIds[i], c.name, c.value]));
     await insertRows(client, "run_coefficients (run_id, name, value)", coefficientRows);
     const valueRows = runs.flatMap((r, i) =>

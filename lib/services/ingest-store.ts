@@ -1,0 +1,75 @@
+import "server-only";
+import type { Knex } from "knex";
+import { insertQuantityValues, seriesKey } from "@/db/queries/quantity-values";
+import { insertRunData } from "@/db/queries/run-data";
+import { deleteRunsByKeys, insertRuns } from "@/db/queries/runs";
+import type { RunDerivation } from "@/lib/evaluation/derive";
+import { judgeRun } from "@/lib/evaluation/judge";
+import type { BandInForce } from "@/lib/evaluation/types";
+import type { RunSubmission } from "@/lib/validation/submission";
+
+export interface StoreRunsContext {
+  build: { id: number; branch: string; received_at: Date };
+  runs: readonly RunSubmission[];
+  derived: readonly RunDerivation[];
+  bandsFor: (run: RunSubmission) => Map<string, BandInForce>;
+  baseline: { buildId: number; values: Map<string, number | null> } | null;
+  history: Map<string, number[]>;
+}
+
+/**
+ * Judges every run of a submission (pure, in memory) and then stores them all
+ * with a fixed number of statements: one DELETE of earlier posts of the same
+ * keys, one INSERT of the runs, one binary COPY of the series, one INSERT each
+ * for the other raw data and one for the judged quantities. A 200-run build
+ * costs the same handful of round trips as a 5-run one.
+ */
+export async function storeRuns(trx: Knex.Transaction, ctx: StoreRunsContext): Promise<number[]> {
+  const { build, runs, derived } = ctx;
+  const judged = runs.map((run, i) => judgeOne(run, derived[i], ctx));
+
+  await deleteRunsByKeys({ db: trx, buildId: build.id, runs });
+  const runIds = await insertRuns({
+    db: trx,
+    buildId: build.id,
+    runs: runs.map((run, i) => ({
+      case: run.case,
+      model: run.model,
+      grid: run.grid,
+      status: run.status,
+      iterations: run.iterations ?? null,
+      wallSeconds: run.wallSeconds ?? null,
+      verdict: judged[i].verdict,
+    })),
+  });
+  await insertRunData({
+    trx,
+    rows: runs.map((run, i) => ({ runId: runIds[i], run, stresses: derived[i].stresses, gridStudy: derived[i].gridStudy })),
+  });
+  await insertQuantityValues({
+    db: trx,
+    build: { id: build.id, branch: build.branch, receivedAt: build.received_at },
+    runs: runs.map((run, i) => ({
+      run: { id: runIds[i], caseKey: run.case, modelKey: run.model, grid: run.grid },
+      quantities: judged[i].quantities,
+    })),
+  });
+  return runIds;
+}
+
+function judgeOne(run: RunSubmission, derivation: RunDerivation, ctx: StoreRunsContext) {
+  const bands = ctx.bandsFor(run);
+  const key = (q: string) => seriesKey(run.case, run.model, run.grid, q);
+  const { baseline, history } = ctx;
+  return judgeRun({
+    status: run.status,
+    quantities: derivation.quantities,
+    bandFor: (q) => bands.get(q) ?? null,
+    expectedKeys: [...bands.keys()],
+    baseline: baseline && {
+      buildId: baseline.buildId,
+      values: new Map([...bands.keys(), ...derivation.quantities.map((q) => q.key)].map((q) => [q, baseline.values.get(key(q)) ?? null])),
+    },
+    history: (q) => history.get(key(q)) ?? [],
+  });
+}
