@@ -3,6 +3,8 @@ import { createYoga, maskError as defaultMaskError } from "graphql-yoga";
 import { AppError, GRAPHQL_CODE, HTTP_STATUS } from "@/lib/errors";
 import { isDatabaseUnavailable } from "@/lib/db-unavailable";
 import type { RequestNote } from "@/lib/http/request-log";
+import { getEnv } from "@/lib/env";
+import { ENVELOPE_ALLOWANCE } from "@/lib/http/body-limit";
 import { getLogger } from "@/lib/log";
 import { createContext, type GraphQLContext } from "./context";
 import { documentLimitPlugins } from "./guards/limits";
@@ -38,6 +40,10 @@ export const yoga = createYoga<ServerContext, GraphQLContext>({
   // One operation per request: no client of ours batches, and a batch of
   // thousands of cheap queries would slip past every per-document limit.
   batching: false,
+  // yoga's own streamed limit (25 MB by default, which quietly undercut
+  // MAX_BODY_BYTES) set to the same figure: the route's counter answers first,
+  // this one still guards in-process callers of yoga.fetch.
+  maxRequestBodySize: getEnv().MAX_BODY_BYTES + ENVELOPE_ALLOWANCE,
   plugins: [useRequestGate(), ...documentLimitPlugins(production), useRequestNotes(), ...executionPlugins],
   maskedErrors: {
     maskError(error, message, isDev) {
