@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { NO_NUL } from "./names";
 
 const optionalNumber = z.number().refine(Number.isFinite, "must be a finite number").nullable();
 const slug = z.string().trim().min(1, "must not be empty").max(64).regex(/^[a-z0-9][a-z0-9-]*$/, "must be lower-case letters, digits and dashes");
@@ -25,13 +26,13 @@ export const bandRevisionSchema = z
     model: slug.nullable(),
     kind: z.enum(["verification", "validation"]),
     reference: optionalNumber,
-    source: z.string().trim().min(3, "must name the published source").max(1000),
+    source: z.string().trim().min(3, "must name the published source").max(1000).refine(...NO_NUL),
     lower: optionalNumber,
     upper: optionalNumber,
     marginalMargin: z.number().min(0, "must not be negative").refine(Number.isFinite),
     noiseFloor: z.number().min(0, "must not be negative").refine(Number.isFinite),
     fitSettings: fitSettingsSchema.default({}),
-    reason: z.string().trim().min(10, "must say why the band changes (at least 10 characters)").max(2000),
+    reason: z.string().trim().min(10, "must say why the band changes (at least 10 characters)").max(2000).refine(...NO_NUL),
   })
   .superRefine((b, ctx) => {
     if (b.lower === null && b.upper === null) ctx.addIssue({ code: "custom", path: ["lower"], message: "a band needs a lower or an upper limit" });

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { NO_NUL } from "./names";
 import { fitSettingsSchema } from "./band";
 
 // Inputs of the case-library editor (QA lead). The same schemas run in the form
@@ -16,10 +17,11 @@ export const changeReason = z
   .string()
   .trim()
   .min(10, "must say why (at least 10 characters)")
-  .max(2000, "must be at most 2000 characters");
+  .max(2000, "must be at most 2000 characters")
+  .refine(...NO_NUL);
 
 const text = (min: number, max: number, what: string) =>
-  z.string().trim().min(min, min <= 1 ? "must not be empty" : `must be at least ${min} characters: ${what}`).max(max, `must be at most ${max} characters`);
+  z.string().trim().min(min, min <= 1 ? "must not be empty" : `must be at least ${min} characters: ${what}`).max(max, `must be at most ${max} characters`).refine(...NO_NUL);
 
 const caseFields = {
   title: text(3, 200, "the case as an engineer names it"),

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { branchName } from "./names";
+import { branchName, NO_NUL } from "./names";
 
 // Inputs of the release gate, shared by the forms (checked in the browser before
 // sending) and the services (checked again on the server).
@@ -25,7 +25,7 @@ export type DecisionState = (typeof decisionStates)[number];
 export const gateDecisionSchema = z.object({
   buildId: idSchema,
   state: z.enum(decisionStates, "must be approved, held or rejected"),
-  comment: z.string().trim().min(5, "must say why (at least 5 characters)").max(2000, "must be at most 2000 characters"),
+  comment: z.string().trim().min(5, "must say why (at least 5 characters)").max(2000, "must be at most 2000 characters").refine(...NO_NUL),
 });
 export type GateDecisionInput = z.infer<typeof gateDecisionSchema>;
 
@@ -35,7 +35,7 @@ export const waiverGrantSchema = z
     quantity: quantityKey,
     model: slug.nullish().transform((v) => v ?? null),
     branch: branchSchema.nullish().transform((v) => v ?? null),
-    reason: z.string().trim().min(10, "must say why the quantity may pass (at least 10 characters)").max(2000),
+    reason: z.string().trim().min(10, "must say why the quantity may pass (at least 10 characters)").max(2000).refine(...NO_NUL),
     expiresAt: z.coerce.date("must be a date"),
   })
   .superRefine((w, ctx) => {
@@ -48,7 +48,7 @@ export type WaiverGrant = z.infer<typeof waiverGrantSchema>;
 
 export const waiverRevokeSchema = z.object({
   id: idSchema,
-  reason: z.string().trim().min(10, "must say why the waiver is withdrawn (at least 10 characters)").max(2000),
+  reason: z.string().trim().min(10, "must say why the waiver is withdrawn (at least 10 characters)").max(2000).refine(...NO_NUL),
 });
 
 export const candidateListSchema = z.object({

@@ -7,6 +7,12 @@ import { z } from "zod";
 // failing the INSERT. Lengths are checked before any pattern so a megabyte of
 // text is refused without scanning it twice.
 
+/**
+ * For free text that may hold newlines (comments, reasons, descriptions): only
+ * U+0000 is refused, which PostgreSQL text cannot store. Use as `.refine(...NO_NUL)`.
+ */
+export const NO_NUL = [(s: string) => !s.includes("\u0000"), "must not contain a NUL character (U+0000)"] as const;
+
 // eslint-disable-next-line no-control-regex
 const CONTROL = /[\u0000-\u001f\u007f]/;
 

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { NO_NUL } from "./names";
 
 // Inputs of the administration screen and the set-password page, shared by the
 // forms (checked before sending) and the services (checked again on the server).
@@ -17,7 +18,7 @@ export const passwordSchema = z
   .refine((s) => new TextEncoder().encode(s).length <= PASSWORD_MAX_BYTES, `must not exceed ${PASSWORD_MAX_BYTES} bytes (bcrypt ignores the rest)`)
   .refine((s) => s.trim().length === s.length, "must not start or end with a space");
 
-const nameSchema = z.string().trim().min(2, "must have at least 2 characters").max(120, "must not exceed 120 characters");
+const nameSchema = z.string().trim().min(2, "must have at least 2 characters").max(120, "must not exceed 120 characters").refine(...NO_NUL);
 const emailSchema = z.string().trim().toLowerCase().max(320, "must not exceed 320 characters").pipe(z.email("must be an e-mail address"));
 
 export const createUserSchema = z.object({ name: nameSchema, email: emailSchema, role: roleSchema, password: passwordSchema }).strict();
@@ -36,7 +37,7 @@ export const acceptInviteSchema = z
 const MAX_TOKEN_LIFETIME_DAYS = 5 * 366;
 export const ciTokenSchema = z
   .object({
-    name: z.string().trim().min(3, "must have at least 3 characters").max(80, "must not exceed 80 characters"),
+    name: z.string().trim().min(3, "must have at least 3 characters").max(80, "must not exceed 80 characters").refine(...NO_NUL),
     expiresAt: z.coerce.date("must be a date").nullable().default(null),
   })
   .strict()
