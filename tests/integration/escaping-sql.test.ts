@@ -88,3 +88,40 @@ describe("SQL meta-characters round-trip verbatim", () => {
     expect(rows).toEqual([{ solver: TEXT.long, branch: TEXT.branch }]);
   });
 });
+
+// PostgreSQL text cannot hold U+0000 (its string functions are NUL-terminated),
+// so a NUL in free text must be refused at the door, naming the field, with
+// 400 — not reach the INSERT and come back as a masked 500.
+describe("a NUL character in free text", () => {
+  const NUL = "refused\u0000text that is long enough";
+  const soon = () => new Date(Date.now() + 86_400_000).toISOString();
+  const nulKey = () => `nul-${Math.random().toString(36).slice(2, 10)}`;
+  const cases: { field: string; role: keyof Cookies; query: string; variables: () => Record<string, unknown>; path: string; stored?: () => Promise<number> }[] = [
+    { field: "a person's name", role: "admin", path: "input.name", query: "mutation($input: NewUserInput!) { createUser(input: $input) { id } }", variables: () => ({ input: { name: NUL, email: `${nulKey()}@fenwick-hydro.test`, role: "developer", password: "nul-check-password-1" } }) },
+    { field: "a CI token's name", role: "admin", path: "input.name", query: "mutation($input: CiTokenInput!) { createCiToken(input: $input) { secret } }", variables: () => ({ input: { name: NUL } }) },
+    { field: "a gate decision's comment", role: "release", path: "input.comment", query: "mutation($input: GateDecisionInput!) { decideGate(input: $input) { state } }", variables: () => ({ input: { buildId: planted.buildId, state: "rejected", comment: NUL } }) },
+    { field: "a waiver's reason", role: "release", path: "input.reason", query: "mutation($input: WaiverInput!) { grantWaiver(input: $input) { id } }", variables: () => ({ input: { case: "backstep", quantity: "reattachment_xr_h", model: "sa", branch: TEXT.branch, reason: NUL, expiresAt: soon() } }) },
+    { field: "a waiver withdrawal's reason", role: "release", path: "reason", query: "mutation($id: ID!, $reason: String!) { revokeWaiver(id: $id, reason: $reason) { id } }", variables: () => ({ id: planted.waiverId, reason: NUL }) },
+    { field: "a case's title", role: "qa", path: "input.title", query: "mutation($input: CaseInput!) { createCase(input: $input) { key } }", variables: () => ({ input: { key: nulKey(), title: NUL, description: "a description long enough", models: ["sa"], reason: "checking NUL refusal" } }) },
+    { field: "a quantity's meaning", role: "qa", path: "input.meaning", query: "mutation($input: QuantityDefinitionInput!) { defineQuantity(input: $input) { key } }", variables: () => ({ input: { key: nulKey().replace("-", "_"), label: "NUL check", unit: "1", meaning: NUL, reason: "checking NUL refusal" } }) },
+    { field: "a band's source", role: "qa", path: "input.source", query: "mutation($input: BandRevisionInput!) { reviseBand(input: $input) { id } }", variables: () => ({ input: { caseKey: planted.caseKey, quantityKey: planted.quantityKey, model: null, kind: "validation", reference: 1, source: NUL, lower: 0, upper: 2, marginalMargin: 0, noiseFloor: 0, reason: "checking NUL refusal" } }) },
+    { field: "a re-judgement's reason", role: "qa", path: "input.reason", query: "mutation($input: ReevaluationInput!) { reevaluateBuilds(input: $input) { id } }", variables: () => ({ input: { buildIds: [planted.buildId], caseKey: "backstep", reason: NUL } }) },
+  ];
+  for (const c of cases) {
+    it(`is refused with 400 naming ${c.path} in ${c.field}`, async () => {
+      const res = await postGraphQL({ query: c.query, variables: c.variables(), cookie: cookies[c.role] });
+      expect(res.status).toBe(400);
+      expect(res.body.errors?.[0]?.extensions?.code).toBe("BAD_USER_INPUT");
+      expect(res.body.errors?.[0]?.extensions?.issues).toContainEqual({ path: c.path, message: "must not contain a NUL character (U+0000)" });
+    });
+  }
+
+  it("leaves nothing behind: no decision, waiver, band version or re-judgement was added by the refused calls", async () => {
+    const db = testDb();
+    const count = async (table: string, where: Record<string, unknown>) => Number((await db(table).where(where).count<{ count: string }[]>({ count: "*" }))[0].count);
+    expect(await count("gate_decisions", { build_id: planted.buildId })).toBe(1);
+    expect(await count("waivers", { branch: TEXT.branch })).toBe(1);
+    expect(await count("bands", { case_key: planted.caseKey })).toBe(1);
+    expect(await count("reevaluations", { build_id: planted.buildId })).toBe(1);
+  });
+});
