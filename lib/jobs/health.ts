@@ -95,10 +95,12 @@ function readCachedFacts(db: Knex): Promise<MailFacts> {
   if (cached && Date.now() - cached.at < CACHE_MS) return cached.value;
   const value = checkMail(db);
   globalForHealth.taulineMailHealth = { at: Date.now(), value };
-  // A failed check is not kept: the next call asks the database again.
-  value.catch(() => {
+  // A failed check, or one that found the queue unreadable (pg-boss still
+  // creating its schema at start-up), is not kept: the next call asks again.
+  const forget = () => {
     if (globalForHealth.taulineMailHealth?.value === value) globalForHealth.taulineMailHealth = undefined;
-  });
+  };
+  value.then((facts) => facts.queue === "down" && forget(), forget);
   return value;
 }
 

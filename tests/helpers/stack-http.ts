@@ -50,7 +50,7 @@ export interface HealthBody {
   database: string;
   latencyMs?: number;
   mail?: Record<string, unknown>;
-  worker?: Record<string, unknown>;
+  worker?: { state: string; since: string | null; lastError: string | null };
 }
 
 export async function getHealth(base: string): Promise<{ status: number; body: HealthBody; ms: number }> {

@@ -27,6 +27,8 @@ export interface TestStack {
   db: Knex;
   appUrl(index: number): string;
   startApp(index: number): Promise<void>;
+  /** Waits until the instance's mail worker runs (its /api/health says so). */
+  waitForWorker(index: number): Promise<void>;
   /** SIGKILL (or another signal) to one app instance's process group; waits until it is gone. */
   stopApp(index: number, signal?: NodeJS.Signals): Promise<void>;
   startSmtp(): Promise<void>;
@@ -116,6 +118,13 @@ export async function startStack({ apps = 1 }: { apps?: number } = {}): Promise<
         return answers(`${stack.appUrl(i)}/api/health`);
       }, { timeoutMs: 45_000, everyMs: 250 });
     },
+    async waitForWorker(i) {
+      await waitUntil(`the mail worker of app ${i} to run`, async () => {
+        const res = await fetch(`${stack.appUrl(i)}/api/health`, { signal: AbortSignal.timeout(3000) });
+        const body = (await res.json()) as { worker?: { state?: string } };
+        return body.worker?.state === "running";
+      }, { timeoutMs: 30_000, everyMs: 200 });
+    },
     async stopApp(i, signal = "SIGKILL") {
       const service = services.get(`app${i}`);
       if (service) await signalService(service, signal);
@@ -144,7 +153,9 @@ export async function startStack({ apps = 1 }: { apps?: number } = {}): Promise<
       process.removeListener("exit", killAllNow);
       await db?.destroy().catch(() => undefined);
       if (await cluster.isRunning()) await cluster.stop("immediate").catch(() => undefined);
-      rmSync(dir, { recursive: true, force: true });
+      // TAULINE_KEEP_FAULT_STACK=1 keeps the folder (app, SMTP and PostgreSQL logs) for a post-mortem.
+      if (process.env.TAULINE_KEEP_FAULT_STACK === "1") console.log(`fault stack kept in ${dir}`);
+      else rmSync(dir, { recursive: true, force: true });
     },
   };
 
@@ -155,7 +166,10 @@ export async function startStack({ apps = 1 }: { apps?: number } = {}): Promise<
     await seedLibrary({ db: stack.db, validFrom: new Date(Date.now() - 365 * 86_400_000) });
     await seedPeople({ db: stack.db, password: DEMO_PASSWORD, ciToken: CI_TOKEN });
     await stack.startSmtp();
-    await Promise.all(appPorts.map((_, i) => stack.startApp(i)));
+    await Promise.all(appPorts.map(async (_, i) => {
+      await stack.startApp(i);
+      await stack.waitForWorker(i);
+    }));
   } catch (error) {
     await stack.close();
     throw error;

@@ -1,5 +1,6 @@
 import { getHealthDb } from "@/db";
 import { getMailHealth } from "@/lib/jobs/health";
+import { getMailWorkerState } from "@/lib/jobs/worker";
 
 export const dynamic = "force-dynamic";
 
@@ -41,5 +42,6 @@ export async function GET() {
   }
   const mail = await getMailHealth(getHealthDb()).catch((error: unknown) => ({ error: (error as Error).message.slice(0, 200), problems: ["the mail state could not be read"] }));
   const status = mail.problems.length ? "degraded" : "ok";
-  return Response.json({ status, database: "up", latencyMs: db.latencyMs, mail }, { headers: { "Cache-Control": "no-store" } });
+  const worker = getMailWorkerState() ?? { state: "not started", since: null, lastError: null };
+  return Response.json({ status, database: "up", latencyMs: db.latencyMs, mail, worker }, { headers: { "Cache-Control": "no-store" } });
 }
