@@ -1,6 +1,7 @@
 import { Client } from "pg";
 import { graphQLBody, postGraphQLBody, requireEnv } from "./http";
-import { StatementLog } from "./statement-count";
+import { generateBenchRuns, withFreshBuild } from "./payload";
+import { StatementLog, captureRequestStatements, replayStatements } from "./statement-count";
 import { ratio, timeRepeated, type Timing } from "./stats";
 
 // Section 3: the build page's query, build(id), for a build of many runs.
@@ -21,20 +22,6 @@ const BUILD = /* GraphQL */ `
   }
 `;
 
-// What that answer needs, read the plainest way: the build, its newest gate
-// decision, its runs, and every quantity value joined to its band and definition.
-const BARE_BUILD_SQL = [
-  "select * from builds where id = $1",
-  "select state from gate_decisions where build_id = $1 order by decided_at desc, id desc limit 1",
-  "select * from runs where build_id = $1 order by id",
-  `select v.*, d.reference, d.source, d.lower, d.upper, d.marginal_margin, q.label, q.unit
-     from quantity_values v
-     left join bands d on d.id = v.band_id
-     left join quantity_definitions q on q.key = v.quantity_key
-    where v.build_id = $1
-    order by v.run_id, v.id`,
-];
-
 export interface BuildViewResult {
   runs: number;
   quantityValues: number;
@@ -54,20 +41,21 @@ export async function benchBuildView({ buildId, smallBuildId, repeats, cookie }:
     quantityValues = data.build.runs.reduce((s, r) => s + r.quantities.length, 0);
   }, repeats, 2);
 
+  // The bare side: the statements this very request sends (session check
+  // included), taken from PostgreSQL's log with their values and replayed with pg.
+  const statements = await captureRequestStatements(() => postGraphQLBody(body, { cookie }));
   const client = new Client({ connectionString: requireEnv("DATABASE_URL") });
   await client.connect();
   let bare: Timing;
   try {
-    bare = await timeRepeated(async () => {
-      for (const sql of BARE_BUILD_SQL) await client.query(sql, [buildId]);
-    }, repeats, 2);
+    bare = await timeRepeated(() => replayStatements(client, statements), repeats, 2);
   } finally {
     await client.end();
   }
 
   // Counted after the timings: logging every statement slows the server down.
   const log = await StatementLog.open();
-  const statements: { runs: number; count: number }[] = [];
+  const counted: { runs: number; count: number }[] = [];
   try {
     await log.setLogging(true);
     for (const id of [smallBuildId, buildId]) {
@@ -82,11 +70,24 @@ export async function benchBuildView({ buildId, smallBuildId, repeats, cookie }:
           runCount = data.build.runs.length;
         }));
       }
-      statements.push({ runs: runCount, count: Math.min(...counts) });
+      counted.push({ runs: runCount, count: Math.min(...counts) });
     }
   } finally {
     await log.setLogging(false).catch(() => undefined);
     await log.close();
   }
-  return { runs, quantityValues, http, bare, buildRatio: ratio(http.median, bare.median), statements };
+  return { runs, quantityValues, http, bare, buildRatio: ratio(http.median, bare.median), statements: counted };
+}
+
+const SUBMIT = /* GraphQL */ `mutation Submit($input: ResultSubmission!) { submitResults(input: $input) { build { id } } }`;
+
+/** Builds of 5 and of `runs` runs posted for this section alone (`--only build`, without the ingest section's). */
+export async function postViewBuilds(runs: number): Promise<{ buildId: string; smallBuildId: string }> {
+  const token = requireEnv("TAULINE_CI_TOKEN");
+  const post = async (n: number) => {
+    const input = withFreshBuild(generateBenchRuns(n, `bench-view-${n}`), `view-${n}-${process.pid}-${Date.now()}`);
+    const data = (await postGraphQLBody(graphQLBody(SUBMIT, { input }), { token })) as { submitResults: { build: { id: string } } };
+    return data.submitResults.build.id;
+  };
+  return { smallBuildId: await post(5), buildId: await post(runs) };
 }

@@ -1,5 +1,6 @@
 import { Client } from "pg";
 import { graphQLBody, postGraphQLBody, requireEnv } from "./http";
+import { captureRequestStatements, replayStatements } from "./statement-count";
 import { ratio, timeRepeated, type Timing } from "./stats";
 
 // Section 2: trend(case, quantity, model, branch, last) as history grows. Each
@@ -14,17 +15,6 @@ const TREND = /* GraphQL */ `
   }
 `;
 
-// The statement db/queries/quantity-values.ts getTrendPoints builds with knex, written out.
-const BARE_TREND_SQL = `
-  select v.build_id, b.commit, b.version, v.build_received_at, v.value, v.verdict, v.drift, v.drift_reason, v.band_id,
-         d.reference, d.lower, d.upper, d.marginal_margin, d.version as band_version
-    from quantity_values as v
-    inner join builds as b on b.id = v.build_id
-    left join bands as d on d.id = v.band_id
-   where v.case_key = $1 and v.quantity_key = $2 and v.model_key = $3 and v.branch = $4 and v.grid = $5
-   order by v.build_received_at desc, v.build_id desc
-   limit $6`;
-
 const SERIES = { case: "flat-plate-zpg", quantity: "kappa", model: "sa", grid: "default" };
 
 export interface TrendSize {
@@ -36,8 +26,10 @@ export interface TrendSize {
   trendRatio: number;
   httpPerPointMs: number;
   barePerPointMs: number;
-  /** Node types of the plan PostgreSQL chose for the bare statement, outermost first. */
+  /** Node types of the plan PostgreSQL chose for the trend statement, outermost first. */
   plan: string[];
+  /** SQL statements one trend request sends (the bare side replays them all). */
+  statements: number;
 }
 
 /** Bulk path: builds, runs and quantity_values of one series from generate_series in one statement. */
@@ -77,20 +69,26 @@ export async function benchTrend({ sizes, last, repeats, cookie }: { sizes: numb
       const variables = { case: SERIES.case, quantity: SERIES.quantity, model: SERIES.model, branch, last };
       const body = graphQLBody(TREND, variables);
       let points = 0;
-      const http = await timeRepeated(async () => {
+      const ask = async () => {
         const data = (await postGraphQLBody(body, { cookie })) as { trend: { points: unknown[] } };
         points = data.trend.points.length;
-      }, repeats, 3);
-      const params = [SERIES.case, SERIES.quantity, SERIES.model, branch, SERIES.grid, last];
-      const bare = await timeRepeated(() => client.query(BARE_TREND_SQL, params), repeats, 3);
+      };
+      // The bare side is the very SQL this request sends (session check
+      // included), taken from PostgreSQL's log and replayed with pg.
+      const statements = await captureRequestStatements(ask);
+      const trendStatement = statements.find((s) => /from quantity_values/i.test(s.text));
+      if (!trendStatement) throw new Error(`trend request sent no quantity_values statement (${statements.length} statements logged)`);
+      const http = await timeRepeated(ask, repeats, 3);
+      const bare = await timeRepeated(() => replayStatements(client, statements), repeats, 3);
       const returned = Math.max(points, 1);
-      const explained = await client.query<{ "QUERY PLAN": [{ Plan: PlanNode }] }>(`explain (format json) ${BARE_TREND_SQL}`, params);
+      const explained = await client.query<{ "QUERY PLAN": [{ Plan: PlanNode }] }>(`explain (format json) ${trendStatement.text}`, trendStatement.params);
       out.push({
         history: n, last: points, seedSeconds, http, bare,
         trendRatio: ratio(http.median, bare.median),
         httpPerPointMs: http.median / returned,
         barePerPointMs: bare.median / returned,
         plan: listNodes(explained.rows[0]["QUERY PLAN"][0].Plan),
+        statements: statements.length,
       });
     }
   } finally {
