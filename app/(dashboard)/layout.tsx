@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { headers } from "next/headers";
 import { redirect } from "next/navigation";
 import type { ReactNode } from "react";
 import { MainNav } from "@/components/shell/main-nav";
@@ -11,8 +12,10 @@ const ROLE_LABEL = { developer: "solver developer", qa: "QA lead", release: "rel
 export default async function DashboardLayout({ children }: { children: ReactNode }) {
   const session = await getCurrentSession();
   if (!session?.user) redirect("/sign-in");
+  // The CSP nonce proxy.ts put on the request, for Apollo's data-transport scripts.
+  const nonce = (await headers()).get("x-nonce") ?? undefined;
   return (
-    <ApolloProvider>
+    <ApolloProvider nonce={nonce}>
       <div className="border-b border-ink/10 bg-paper-raised/70 dark:border-white/10 dark:bg-white/5">
         <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-x-6 gap-y-2 px-6 py-2">
           <Link href="/" className="font-semibold tracking-tight text-tide-700 dark:text-tide-300">

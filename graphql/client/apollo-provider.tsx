@@ -26,6 +26,11 @@ function makeClient() {
   });
 }
 
-export function ApolloProvider({ children }: { children: ReactNode }) {
-  return <ApolloNextAppProvider makeClient={makeClient}>{children}</ApolloNextAppProvider>;
+/** `nonce`: the page's CSP nonce (proxy.ts), stamped on the scripts that carry server-rendered query data to the browser. */
+export function ApolloProvider({ children, nonce }: { children: ReactNode; nonce?: string }) {
+  return (
+    <ApolloNextAppProvider makeClient={makeClient} extraScriptProps={nonce ? { nonce } : undefined}>
+      {children}
+    </ApolloNextAppProvider>
+  );
 }
