@@ -66,6 +66,23 @@ export async function insertRuns({ db, buildId, runs }: { db: Db; buildId: numbe
 
 const runKey = (caseKey: string, model: string, grid: string) => `${caseKey}|${model}|${grid}`;
 
+/**
+ * The runs stored now under these keys of a build, in the order given (a key
+ * with no run is left out). A submission's receipt reads its runs this way: a
+ * concurrent re-post of the same build may already have replaced the rows it
+ * inserted, and then the receipt shows the replacement, not a vanished id.
+ */
+export async function getRunsByKeys({ db, buildId, runs }: { db: Db; buildId: number; runs: readonly Pick<NewRun, "case" | "model" | "grid">[] }): Promise<RunRow[]> {
+  if (runs.length === 0) return [];
+  const result: { rows: RunRow[] } = await db.raw(
+    `select r.* from unnest(?::text[], ?::text[], ?::text[]) with ordinality as k(case_key, model_key, grid, n)
+       join runs r on r.build_id = ? and r.case_key = k.case_key and r.model_key = k.model_key and r.grid = k.grid
+      order by k.n`,
+    [runs.map((r) => r.case), runs.map((r) => r.model), runs.map((r) => r.grid), buildId],
+  );
+  return result.rows;
+}
+
 export async function getRunsByIds({ db, ids }: { db: Db; ids: readonly number[] }): Promise<RunRow[]> {
   if (ids.length === 0) return [];
   return db("runs").whereIn("id", ids as number[]).select("*");

@@ -1,7 +1,7 @@
 import { AppError, type FieldIssue } from "@/lib/errors";
 import { getEnv } from "@/lib/env";
 import { requireSubmitter } from "@/lib/services/authorize";
-import { submitResults } from "@/lib/services/ingest";
+import { readReceiptRuns, submitResults } from "@/lib/services/ingest";
 import { assembleUpload, describeUploadIssues, locateCsvIssues, type AssembledUpload } from "@/lib/validation/upload";
 import type { GraphQLContext } from "../context";
 
@@ -27,7 +27,8 @@ export const Mutation = {
       }
       throw error;
     }
-    const [build, runs] = await Promise.all([ctx.loaders.build.load(result.buildId), Promise.all(result.runIds.map((id) => ctx.loaders.run.load(id)))]);
+    // Runs by key, not by the ids just inserted: a concurrent re-post of this build may have replaced them since the commit.
+    const [build, runs] = await Promise.all([ctx.loaders.build.load(result.buildId), readReceiptRuns(result)]);
     return { build, runs, created: result.created };
   },
 };

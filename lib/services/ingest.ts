@@ -4,6 +4,7 @@ import { insertAuditEntry } from "@/db/queries/audit";
 import { getBaselineBuild, setBuildVerdict, upsertBuildForUpdate } from "@/db/queries/builds";
 import { getBandsInForce, getCases, getModelKeys, type CaseRow } from "@/db/queries/library";
 import { getRecentValues, getValuesOfBuild } from "@/db/queries/quantity-values";
+import { getRunsByKeys } from "@/db/queries/runs";
 import { deriveRunQuantities, type RunDerivation } from "@/lib/evaluation/derive";
 import { DRIFT_WINDOW } from "@/lib/evaluation/judge";
 import type { BandInForce, FitSettings } from "@/lib/evaluation/types";
@@ -17,6 +18,8 @@ import { storeRuns } from "./ingest-store";
 export interface SubmissionResult {
   buildId: number;
   runIds: number[];
+  /** The case × model × grid of each run, in the order posted (the receipt reads the runs by these). */
+  runKeys: { case: string; model: string; grid: string }[];
   created: boolean;
 }
 
@@ -97,11 +100,22 @@ export async function submitResults({
         at: receivedAt,
       },
     });
-    return { result: { buildId: build.id, runIds, created }, outboxIds: alerts.outboxIds };
+    const runKeys = input.runs.map((r) => ({ case: r.case, model: r.model, grid: r.grid }));
+    return { result: { buildId: build.id, runIds, runKeys, created }, outboxIds: alerts.outboxIds };
   });
   // Only after commit: a delivery job must find the outbox row it names.
   await sendQueuedAlerts(outcome.outboxIds);
   return outcome.result;
+}
+
+/**
+ * The runs a receipt reports: those stored now under the submission's keys. A
+ * concurrent re-post of the same build may have replaced the rows this one
+ * inserted between its commit and this read; the receipt then shows the
+ * replacement (same keys, same build) instead of failing on a vanished id.
+ */
+export async function readReceiptRuns(result: SubmissionResult) {
+  return getRunsByKeys({ db: getDb(), buildId: result.buildId, runs: result.runKeys });
 }
 
 export function parseSubmission(unsafeInput: unknown): ResultSubmission {
