@@ -1,0 +1,94 @@
+#!/usr/bin/env bash
+# npm run load: CI clients posting submissions and signed-in readers at the same
+# time against a production build (issue 6), then a database check that every
+# acknowledged run, and nothing else, was stored. Bootstraps like npm test: a
+# throwaway database on the project's cluster, the SMTP fake, a build of its own
+# and ports of its own, so it can run beside npm start, npm test and npm run
+# bench. Everything it starts is stopped and the database dropped on exit.
+# Arguments go to scripts/load/main.ts (npm run load -- --duration 5).
+# Exit code 0 only when there were no errors and the database check passed.
+set -euo pipefail
+: "${TAULINE_LOAD_PORT:=3500}"
+# The bench's PostgreSQL port when the cluster has to be started: a clean
+# clone's npm test elsewhere on this machine may hold 54329.
+: "${PGPORT_TAULINE:=54339}"
+: "${TAULINE_LOAD_SMTP_PORT:=2529}"
+# shellcheck source=scripts/lib/load.sh
+source "$(dirname "${BASH_SOURCE[0]}")/lib/load.sh"
+cd "$TAULINE_ROOT"
+
+ensure_data_dirs
+# One load run at a time per checkout (they share the ports and the build).
+hold_lock load 9
+ensure_node_modules
+ensure_pg_bin
+
+load_db="tauline_load_$$"
+load_mail_dir="$DATA_DIR/load-mail-$$"
+web_pid_file="$RUN_DIR/load-web.pid"
+smtp_pid_file="$RUN_DIR/load-smtp.pid"
+db_created=0
+PG_STARTED_HERE=0
+
+# True while a database of another test, bench or load run lives in the cluster
+# (that run joined the cluster we started; stopping it would pull it from under them).
+other_run_uses_cluster() {
+  [ -n "$(pg_admin_sql "SELECT 1 FROM pg_database WHERE datname ~ '^tauline_(test|bench|load)_' AND datname <> '$load_db' LIMIT 1")" ]
+}
+
+clean_up_load() {
+  local status=$?
+  trap - EXIT INT TERM
+  set +e
+  stop_by_pid_file "$web_pid_file" next "load web server"
+  stop_by_pid_file "$smtp_pid_file" smtp-fake "load SMTP fake"
+  if [ -n "${PGDATA_TAULINE:-}" ]; then
+    hold_lock cluster 8
+    if [ "$db_created" = 1 ]; then
+      say "dropping $load_db"
+      drop_database "$load_db" >/dev/null
+    fi
+    if [ "$PG_STARTED_HERE" = 1 ] && ! read_live_pid "$RUN_DIR/web.pid" next >/dev/null && ! other_run_uses_cluster; then
+      stop_pg
+    fi
+    release_lock 8
+  fi
+  rm -rf "$load_mail_dir"
+  exit "$status"
+}
+trap clean_up_load EXIT
+trap 'exit 130' INT
+trap 'exit 143' TERM
+
+hold_lock cluster 8
+resolve_pg_data
+ensure_pg_bin
+# Join the cluster on whatever port it already runs on (npm test starts it on
+# 54329, npm run bench on 54339) instead of refusing to run beside them.
+if pg_is_running; then
+  match_pg_bin_to_cluster
+  PGPORT_TAULINE="$(running_pg_port)"
+fi
+export PGPORT_TAULINE
+ensure_pg_running
+ensure_app_role
+ensure_database "$load_db"
+db_created=1
+release_lock 8
+
+export_app_env "$TAULINE_LOAD_PORT" "$TAULINE_LOAD_SMTP_PORT" "$load_db" "$load_mail_dir"
+# A build folder of its own, inside .data (git-ignored).
+export NEXT_DIST_DIR="${TAULINE_LOAD_DIST_DIR:-.data/next-load}"
+
+say "migrating and seeding $load_db"
+npm run --silent db:migrate
+npm run --silent db:seed
+
+: >"$RUN_DIR/load-smtp.log"
+start_smtp_fake "$smtp_pid_file" "$RUN_DIR/load-smtp.log"
+build_web
+: >"$RUN_DIR/load-web.log"
+start_web "$web_pid_file" "$RUN_DIR/load-web.log"
+
+say "running the load against $APP_URL (server log: $RUN_DIR/load-web.log)"
+./node_modules/.bin/tsx --conditions=react-server scripts/load/main.ts "$@"
