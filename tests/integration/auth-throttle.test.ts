@@ -103,7 +103,7 @@ describe("per address", () => {
     const attacker = await client();
     for (let i = 0; i < env.SIGNIN_ADDRESS_LIMIT; i++) {
       // Without TRUST_PROXY the header is the client's own claim and must not move the count elsewhere.
-      const claim = env.TRUST_PROXY ? {} : { "x-forwarded-for": `198.51.100.${(i % 250) + 1}` };
+      const claim: Record<string, string> = env.TRUST_PROXY ? {} : { "x-forwarded-for": `198.51.100.${(i % 250) + 1}` };
       expect((await attacker.attempt(targets[Math.floor(i / perAccount)], "spray-guess", claim)).status).toBe(401);
     }
     const refused = await attacker.attempt(victim, PASSWORD);

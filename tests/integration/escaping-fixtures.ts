@@ -43,7 +43,8 @@ export async function signInEveryRole(): Promise<Cookies> {
   return { developer, qa, release, admin };
 }
 
-export async function plantHostileText(text: HostileText, cookies: Cookies): Promise<Planted> {
+/** `reattachment`: the run's reported reattachment length; a value outside its band (e.g. 60) makes the build send an alert mail. */
+export async function plantHostileText(text: HostileText, cookies: Cookies, { reattachment = 6.3 }: { reattachment?: number } = {}): Promise<Planted> {
   const tag = randomBytes(4).toString("hex");
   const commit = randomCommit();
   const as = (role: keyof Cookies, what: string, query: string, variables: Record<string, unknown>) => postGraphQL({ query, variables, cookie: cookies[role] }).then((r) => expectOk(what, r));
@@ -56,7 +57,7 @@ export async function plantHostileText(text: HostileText, cookies: Cookies): Pro
       variables: {
         input: {
           build: { solver: text.long, version: text.long, commit, branch: text.branch, pipelineUrl: `https://ci.fenwick-hydro.test/pipelines/${tag}?q=${encodeURIComponent(text.short)}` },
-          runs: [{ case: "backstep", model: "sa", status: "COMPLETED", quantities: [{ key: "reattachment_xr_h", value: 6.3 }], coefficients: [{ name: text.short, value: 0.41 }] }],
+          runs: [{ case: "backstep", model: "sa", status: "COMPLETED", quantities: [{ key: "reattachment_xr_h", value: reattachment }], coefficients: [{ name: text.short, value: 0.41 }] }],
         },
       },
     }),
