@@ -1,6 +1,7 @@
 import knexFactory, { type Knex } from "knex";
 import pg from "pg";
 import { createKnexConfig } from "../knexfile";
+import { getLogger } from "../lib/log";
 
 // numeric and bigint (ids, count(*)) come back as JS numbers while they are
 // exactly representable; a bigint beyond 2^53 stays a string rather than rounding.
@@ -27,8 +28,18 @@ function createPoolConfig(databaseUrl?: string, pool?: Knex.PoolConfig): Knex.Co
     ...base,
     connection: { connectionString: String(base.connection), connectionTimeoutMillis: 5_000, keepAlive: true },
     pool: { ...base.pool, ...pool },
+    log: knexLog,
   };
 }
+
+// Knex's own warnings (a dropped dead connection, a refused connect) as JSON
+// log lines with the request id, instead of bare console text.
+const knexLog = {
+  warn: (message: unknown) => getLogger().warn({ component: "db", detail: String(message) }, "knex warning"),
+  error: (message: unknown) => getLogger().error({ component: "db", detail: String(message) }, "knex error"),
+  deprecate: (method: unknown, alternative: unknown) => getLogger().warn({ component: "db", detail: `${String(method)} is deprecated; use ${String(alternative)}` }, "knex deprecation"),
+  debug: (message: unknown) => getLogger().debug({ component: "db", detail: typeof message === "string" ? message : JSON.stringify(message) }, "knex debug"),
+};
 
 export function getDb(): Knex {
   if (!globalForDb.taulineDb) globalForDb.taulineDb = knexFactory(createPoolConfig());

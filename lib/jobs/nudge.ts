@@ -1,5 +1,5 @@
 import "server-only";
-import { getLogger } from "@/lib/log";
+import { currentRequestId, getLogger } from "@/lib/log";
 import { getBoss } from "./boss";
 import { DELIVER_QUEUE } from "./queues";
 
@@ -13,7 +13,10 @@ export async function nudgeMailDelivery(outboxIds: number[]): Promise<void> {
   if (outboxIds.length === 0) return;
   try {
     const boss = await getBoss();
-    for (const id of outboxIds) await boss.send(DELIVER_QUEUE, { outboxId: id }, { singletonKey: `outbox:${id}` });
+    // The request that queued the mail travels with the job, so the worker's log
+    // lines about this delivery carry the same requestId as the submission's.
+    const requestId = currentRequestId();
+    for (const id of outboxIds) await boss.send(DELIVER_QUEUE, { outboxId: id, ...(requestId ? { requestId } : {}) }, { singletonKey: `outbox:${id}` });
   } catch (error) {
     getLogger().error({ component: "mail", outboxIds, err: String(error) }, "could not queue delivery; the outbox sweep will");
   }

@@ -1,5 +1,5 @@
 import "server-only";
-import { getLogger } from "@/lib/log";
+import { getLogger, runWithRequestId } from "@/lib/log";
 import { getBoss } from "./boss";
 import { deliverOutboxMessage, sweepOutbox } from "./deliver";
 import { sendPendingDigests } from "./digest";
@@ -31,8 +31,9 @@ export function getMailWorkerState(): MailWorkerState | null {
 async function registerWorkers(): Promise<void> {
   const boss = await getBoss();
   // One job per fetch: a thrown error fails (and retries) exactly that job.
-  await boss.work<{ outboxId: number }>(DELIVER_QUEUE, { batchSize: 1, pollingIntervalSeconds: 1, includeMetadata: true }, async ([job]) => {
-    await deliverOutboxMessage({ outboxId: job.data.outboxId, retryCount: job.retryCount });
+  await boss.work<{ outboxId: number; requestId?: string }>(DELIVER_QUEUE, { batchSize: 1, pollingIntervalSeconds: 1, includeMetadata: true }, async ([job]) => {
+    const deliver = () => deliverOutboxMessage({ outboxId: job.data.outboxId, retryCount: job.retryCount });
+    await (job.data.requestId ? runWithRequestId(job.data.requestId, deliver) : deliver());
   });
   await boss.work(SWEEP_QUEUE, { batchSize: 1, pollingIntervalSeconds: 5 }, async () => {
     await sweepOutbox();
