@@ -55,3 +55,23 @@ export function readRssBytes(pid: number): number {
   if (!kb) throw new Error(`no VmRSS for pid ${pid}`);
   return Number(kb) * 1024;
 }
+
+/**
+ * The file the process (or the nearest ancestor, for `next dev`'s worker)
+ * writes its standard output to: the server's log. Null when it goes to a
+ * terminal or pipe all the way up.
+ */
+export function serverLogPath(pid: number): string | null {
+  let current = pid;
+  for (let hops = 0; hops < 5 && current > 1; hops++) {
+    try {
+      const target = readlinkSync(`/proc/${current}/fd/1`);
+      if (target.startsWith("/") && !target.startsWith("/dev/")) return target;
+      const parent = /^PPid:\s+(\d+)$/m.exec(readFileSync(`/proc/${current}/status`, "utf8"))?.[1];
+      current = Number(parent ?? 0);
+    } catch {
+      return null;
+    }
+  }
+  return null;
+}
