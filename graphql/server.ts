@@ -52,7 +52,8 @@ export const yoga = createYoga<ServerContext, GraphQLContext>({
         return new GraphQLError(original.message, {
           nodes: error instanceof GraphQLError ? error.nodes : undefined,
           path: error instanceof GraphQLError ? error.path : undefined,
-          extensions: { code: GRAPHQL_CODE[original.code], http: { status: HTTP_STATUS[original.code] }, issues: original.issues },
+          // A 401 names the scheme that would be accepted (RFC 6750 §3), also when no credentials came at all.
+          extensions: { code: GRAPHQL_CODE[original.code], http: { status: HTTP_STATUS[original.code], ...(original.code === "unauthorized" ? { headers: { "WWW-Authenticate": "Bearer" } } : {}) }, issues: original.issues },
         });
       }
       if (isDatabaseUnavailable(original)) {
