@@ -13,11 +13,28 @@ const globalForJobs = globalThis as unknown as { taulineBoss?: Promise<PgBoss> }
 
 export const BOSS_SCHEMA = "pgboss";
 
+// While PostgreSQL is away every poll of every queue fails, several times a
+// second: the first error is logged, then one line per 30 s with the count.
+const ERROR_LOG_EVERY_MS = 30_000;
+let lastErrorLogAt = 0;
+let suppressedErrors = 0;
+
+function logBossError(error: Error): void {
+  const now = Date.now();
+  if (now - lastErrorLogAt < ERROR_LOG_EVERY_MS) {
+    suppressedErrors++;
+    return;
+  }
+  getLogger().error({ component: "jobs", err: error.message, similarErrorsSinceLastLine: suppressedErrors }, "pg-boss error");
+  lastErrorLogAt = now;
+  suppressedErrors = 0;
+}
+
 async function startBoss(): Promise<PgBoss> {
   const boss = new PgBoss({ connectionString: getEnv().DATABASE_URL, schema: BOSS_SCHEMA, max: 4, application_name: "tauline-jobs" });
   // An error here is a failed poll or maintenance run; pg-boss keeps going and
   // the outbox keeps the mail, so it is logged and not thrown.
-  boss.on("error", (error) => getLogger().error({ component: "jobs", err: error.message }, "pg-boss error"));
+  boss.on("error", logBossError);
   await boss.start();
   // 'short': at most one waiting job per outbox row (singleton key); a second
   // nudge for the same row while one waits is dropped by pg-boss.
