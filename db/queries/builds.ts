@@ -1,6 +1,6 @@
 import "server-only";
 import type { Db } from "../index";
-import { worstVerdict, type Verdict } from "@/lib/analysis";
+import { VERDICT_ORDER, type Verdict } from "@/lib/analysis";
 
 export interface BuildRow {
   id: number;
@@ -15,9 +15,12 @@ export interface BuildRow {
 }
 
 /**
- * Finds the build of this commit or creates it, and locks its row for the rest of
- * the transaction so that concurrent re-posts of one build are applied one after
- * the other instead of racing on its runs.
+ * Finds the build of this commit or creates it, in one statement, and locks its
+ * row for the rest of the transaction (INSERT … ON CONFLICT DO UPDATE locks the
+ * existing row as FOR UPDATE would) so that concurrent re-posts of one build are
+ * applied one after the other instead of racing on its runs. A re-post updates
+ * the version and pipeline URL and stamps updated_at; the branch is never
+ * changed here (the caller refuses a re-post on another branch).
  */
 export async function upsertBuildForUpdate({
   db,
@@ -28,25 +31,17 @@ export async function upsertBuildForUpdate({
   build: { solver: string; version: string; commit: string; branch: string; pipelineUrl?: string | null };
   receivedAt?: Date;
 }): Promise<{ row: BuildRow; created: boolean }> {
-  const inserted = await db("builds")
-    .insert({
-      solver: build.solver,
-      version: build.version,
-      commit: build.commit,
-      branch: build.branch,
-      pipeline_url: build.pipelineUrl ?? null,
-      ...(receivedAt ? { received_at: receivedAt, updated_at: receivedAt } : {}),
-    })
-    .onConflict("commit")
-    .ignore()
-    .returning("id");
-  const row: BuildRow = await db("builds").where({ commit: build.commit }).forUpdate().first();
-  if (inserted.length === 0) {
-    await db("builds")
-      .where({ id: row.id })
-      .update({ updated_at: db.fn.now(), pipeline_url: build.pipelineUrl ?? row.pipeline_url, version: build.version });
-  }
-  return { row, created: inserted.length > 0 };
+  const result: { rows: (BuildRow & { created: boolean })[] } = await db.raw(
+    `insert into builds (solver, version, commit, branch, pipeline_url, received_at, updated_at)
+     values (?, ?, ?, ?, ?, coalesce(?::timestamptz, now()), coalesce(?::timestamptz, now()))
+     on conflict (commit) do update
+       set updated_at = now(), version = excluded.version, pipeline_url = coalesce(excluded.pipeline_url, builds.pipeline_url)
+     returning *, (xmax = 0) as created`,
+    [build.solver, build.version, build.commit, build.branch, build.pipelineUrl ?? null, receivedAt ?? null, receivedAt ?? null],
+  );
+  // xmax is 0 on a freshly inserted row version and set on one written by the DO UPDATE branch.
+  const { created, ...row } = result.rows[0];
+  return { row, created };
 }
 
 export async function getBuildsByIds({ db, ids }: { db: Db; ids: readonly number[] }): Promise<BuildRow[]> {
@@ -58,11 +53,15 @@ export async function getBuildByCommit({ db, commit }: { db: Db; commit: string 
   return db("builds").where({ commit: commit.toLowerCase() }).first();
 }
 
+/** Sets the build's verdict to its worst run's (VERDICT_ORDER; no runs: 'missing') in one statement. */
 export async function setBuildVerdict({ db, buildId }: { db: Db; buildId: number }): Promise<Verdict> {
-  const rows: { verdict: Verdict }[] = await db("runs").where({ build_id: buildId }).select("verdict");
-  const verdict = worstVerdict(rows.map((r) => r.verdict));
-  await db("builds").where({ id: buildId }).update({ verdict });
-  return verdict;
+  const result: { rows: { verdict: Verdict }[] } = await db.raw(
+    `update builds set verdict = coalesce(
+       (select r.verdict from runs r where r.build_id = builds.id order by array_position(?::text[], r.verdict) desc limit 1), 'missing')
+     where id = ? returning verdict`,
+    [[...VERDICT_ORDER], buildId],
+  );
+  return result.rows[0].verdict;
 }
 
 export interface BuildListFilter {
