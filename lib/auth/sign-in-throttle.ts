@@ -20,7 +20,7 @@ import { getLogger } from "@/lib/log";
 // behind one address (or the test suite on 127.0.0.1) signing in correctly
 // never fills it; only guesses do.
 
-export const THROTTLE_TABLE = "sign_in_throttle";
+const THROTTLE_TABLE = "sign_in_throttle";
 
 interface Limiters {
   account: RateLimiterPostgres;
@@ -53,7 +53,7 @@ export function runWithThrottleNote<T>(fn: () => Promise<T>): Promise<{ result: 
   return refusals.run(note, async () => ({ result: await fn(), retryAfterSeconds: note.retryAfterSeconds }));
 }
 
-export const THROTTLE_MESSAGE_START = "Too many";
+const THROTTLE_MESSAGE_START = "Too many";
 
 function refuse(res: RateLimiterRes, whose: "account" | "address"): never {
   const seconds = Math.max(1, Math.ceil(res.msBeforeNext / 1000));
