@@ -1,5 +1,6 @@
 import "server-only";
 import type { Knex } from "knex";
+import { countQueueJobs, getOutboxBacklog } from "@/db/queries/mail-health";
 import { BOSS_SCHEMA } from "./boss";
 import { DELIVER_QUEUE, DIGEST_QUEUE, SWEEP_QUEUE } from "./queues";
 import { getMailWorkerState, type MailWorkerState } from "./worker";
@@ -38,30 +39,13 @@ const globalForHealth = globalThis as unknown as { taulineMailHealth?: { at: num
 
 async function readJobCounts(db: Knex): Promise<Record<string, QueueCounts>> {
   const jobs = Object.fromEntries(QUEUES.map((q) => [q, { waiting: 0, active: 0, failed: 0 }]));
-  const rows: { name: string; state: string; n: number }[] = (
-    await db.raw(
-      `select name, state::text as state, count(*)::int as n from ${BOSS_SCHEMA}.job
-        where name = any(?) and state in ('created','retry','active','failed') group by 1, 2`,
-      [QUEUES],
-    )
-  ).rows;
-  for (const r of rows) {
+  for (const r of await countQueueJobs({ db, schema: BOSS_SCHEMA, queues: QUEUES })) {
     const counts = jobs[r.name];
     if (r.state === "active") counts.active += r.n;
     else if (r.state === "failed") counts.failed += r.n;
     else counts.waiting += r.n;
   }
   return jobs;
-}
-
-async function readOutbox(db: Knex): Promise<MailHealth["outbox"]> {
-  const { rows } = await db.raw(
-    `select count(*)::int as unsent, count(*) filter (where status = 'failed')::int as failed,
-            extract(epoch from now() - min(created_at))::float8 as oldest
-       from mail_outbox where status in ('queued', 'sending', 'failed')`,
-  );
-  const r = rows[0] as { unsent: number; failed: number; oldest: number | null };
-  return { unsent: r.unsent, failedAttempts: r.failed, oldestUnsentSeconds: r.oldest === null ? null : Math.round(r.oldest) };
 }
 
 function listProblems(h: MailFacts, worker: MailWorkerState | null): string[] {
@@ -76,7 +60,7 @@ function listProblems(h: MailFacts, worker: MailWorkerState | null): string[] {
 
 async function checkMail(db: Knex): Promise<MailFacts> {
   const checkedAt = new Date().toISOString();
-  const outbox = await readOutbox(db);
+  const outbox = await getOutboxBacklog({ db });
   let jobs: Record<string, QueueCounts> = {};
   let queue: MailHealth["queue"] = "up";
   let queueError: string | undefined;

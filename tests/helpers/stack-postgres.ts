@@ -1,3 +1,4 @@
+import { spawnSync } from "node:child_process";
 import { appendFileSync, chmodSync, existsSync, mkdirSync, readdirSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { runCommand } from "./stack-process";
@@ -65,9 +66,9 @@ export class TestCluster {
     if (isRoot) await runCommand("chown", ["postgres:postgres", path]);
   }
 
-  /** Superuser SQL over the socket in the data folder. */
-  sql(statement: string): Promise<string> {
-    return asPg(join(this.bin, "psql"), ["-h", this.data, "-p", String(this.port), "-U", "postgres", "-d", "postgres", "-X", "-q", "-t", "-A", "-v", "ON_ERROR_STOP=1", "-c", statement]);
+  /** Superuser SQL over the socket in the data folder (in the `postgres` database unless told). */
+  sql(statement: string, database = "postgres"): Promise<string> {
+    return asPg(join(this.bin, "psql"), ["-h", this.data, "-p", String(this.port), "-U", "postgres", "-d", database, "-X", "-q", "-t", "-A", "-v", "ON_ERROR_STOP=1", "-c", statement]);
   }
 
   async start(): Promise<void> {
@@ -77,6 +78,14 @@ export class TestCluster {
   /** `immediate`: every backend is killed at once, no checkpoint; crash recovery runs at the next start. */
   async stop(mode: "fast" | "immediate" = "fast"): Promise<void> {
     await asPg(join(this.bin, "pg_ctl"), ["stop", "-D", this.data, "-m", mode, "-w", "-t", "60", "-s"]);
+  }
+
+  /** Synchronous immediate stop, for a process-exit hook (no event loop left there). */
+  stopNow(): void {
+    if (!existsSync(join(this.data, "postmaster.pid"))) return;
+    const args = ["stop", "-D", this.data, "-m", "immediate", "-w", "-t", "20", "-s"];
+    if (isRoot) spawnSync("runuser", ["-u", "postgres", "--", join(this.bin, "pg_ctl"), ...args], { cwd: "/" });
+    else spawnSync(join(this.bin, "pg_ctl"), args, { cwd: "/" });
   }
 
   async isRunning(): Promise<boolean> {

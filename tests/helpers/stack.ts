@@ -88,9 +88,10 @@ export async function startStack({ apps = 1 }: { apps?: number } = {}): Promise<
   const services = new Map<string, Service>();
   let db: Knex | undefined;
 
-  // A crashed test worker must not leave servers behind: kill the groups synchronously on exit.
+  // A crashed test worker must not leave servers behind: kill the groups and stop the cluster synchronously on exit.
   const killAllNow = () => {
     for (const s of services.values()) if (s.child.pid && s.child.exitCode === null) spawnSync("kill", ["-KILL", `-${s.child.pid}`]);
+    cluster.stopNow();
   };
   process.once("exit", killAllNow);
 

@@ -3,7 +3,9 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { generateBenchRuns } from "@/scripts/bench/payload";
 import { randomCommit } from "../helpers/graphql";
 import { startStack, type TestStack } from "../helpers/stack";
-import { getHealth, postAt, submitBody, type Receipt } from "../helpers/stack-http";
+import { getHealth, outsideDecayRun, postAt, submitBody, type Receipt } from "../helpers/stack-http";
+import { outboxOfBuilds, waitForEvents } from "../helpers/stack-outbox";
+import { DB_NAME } from "../helpers/stack-postgres";
 import { waitUntil } from "../helpers/stack-process";
 
 // PostgreSQL stopped hard in the middle of an ingest, on a private stack (own
@@ -46,6 +48,20 @@ describe.sequential("PostgreSQL stopped hard during an ingest", () => {
     expect(health.body.latencyMs).toBeGreaterThanOrEqual(0);
     expect(health.body.mail).toMatchObject({ queue: "up", outbox: { unsent: 0, oldestUnsentSeconds: null }, problems: [] });
     expect(Object.keys((health.body.mail as { jobs: object }).jobs).sort()).toEqual(["mail-deliver", "mail-digest", "mail-sweep"]);
+  });
+
+  it("stays in service (200) but reports degraded when the job queue cannot be read", async () => {
+    // pg-boss's tables out of reach (as after a failed pg-boss migration): mail would pile up, CI posts still work.
+    await stack.cluster.sql("alter schema pgboss rename to pgboss_away", DB_NAME);
+    try {
+      await waitUntil("health to report the queue down", async () => {
+        const h = await getHealth(stack.appUrl(0));
+        return h.status === 200 && h.body.status === "degraded" && (h.body.mail as { queue: string }).queue === "down";
+      }, { timeoutMs: 10_000, everyMs: 250 });
+    } finally {
+      await stack.cluster.sql("alter schema pgboss_away rename to pgboss", DB_NAME);
+    }
+    await waitUntil("health to be ok again", async () => (await getHealth(stack.appUrl(0))).body.status === "ok", { timeoutMs: 10_000, everyMs: 250 });
   });
 
   it("answers 503 with Retry-After when the cluster dies mid-transaction, and keeps nothing of the cut submission", async () => {
@@ -114,5 +130,17 @@ describe.sequential("PostgreSQL stopped hard during an ingest", () => {
     expect(await count(stack.db("runs").where({ build_id: build.id }))).toBe(40);
     expect(await count(stack.db("submissions").where({ build_id: build.id }))).toBe(1);
     expect(await count(stack.db("run_series as s").join("runs as r", "r.id", "s.run_id").where("r.build_id", build.id))).toBe(120);
+  });
+});
+
+describe("after the outage", () => {
+  it("still mails alerts: the instance's pg-boss worker came back with the database", async () => {
+    const res = await postAt<Receipt>(stack.appUrl(0), submitBody({ build: { solver: "Cormorant", version: "9.9.0-faults", commit: randomCommit(), branch: BRANCH }, runs: [outsideDecayRun()] }));
+    expect(res.body.errors).toBeUndefined();
+    const buildId = Number(res.body.data!.submitResults.build.id);
+    const rows = await outboxOfBuilds(stack.db, [buildId]);
+    expect(rows).toHaveLength(1);
+    await waitForEvents(stack.mailDir, [rows[0].event_key], 30_000);
+    expect((await getHealth(stack.appUrl(0))).body.worker?.state).toBe("running");
   });
 });
