@@ -118,7 +118,7 @@ describe("free text on the pages", () => {
   });
 
   it("is text on the administration page (person's name, token name)", async () => {
-    await expectShownAsText(admin, "/admin", [[TEXT.long, 2]]);
+    await expectShownAsText(admin, "/admin", [[TEXT.long, 1], [planted.tokenName, 1]]);
   });
 
   it("is text on the developer's alert settings (subscribed branch)", async () => {

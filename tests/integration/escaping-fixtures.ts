@@ -84,7 +84,8 @@ export async function plantHostileText(text: HostileText, cookies: Cookies, { re
 
   const userEmail = `esc-${tag}@fenwick-hydro.test`;
   await as("admin", "createUser", "mutation($input: NewUserInput!) { createUser(input: $input) { id } }", { input: { name: text.long, email: userEmail, role: "developer", password: `escaping-${tag}-pw` } });
-  const tokenName = text.long.slice(0, 80);
+  // Its own text (not a part of `long`), so a page can be checked for showing the token's name itself.
+  const tokenName = `token ${text.short}`;
   await as("admin", "createCiToken", "mutation($input: CiTokenInput!) { createCiToken(input: $input) { token { id } } }", { input: { name: tokenName, expiresAt: null } });
 
   const subscription = (await as("developer", "saveAlertSubscription", "mutation($input: AlertSubscriptionInput!) { saveAlertSubscription(input: $input) { id } }", {
