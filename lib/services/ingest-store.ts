@@ -5,7 +5,7 @@ import { insertRunData } from "@/db/queries/run-data";
 import { deleteRunsByKeys, insertRuns } from "@/db/queries/runs";
 import type { RunDerivation } from "@/lib/evaluation/derive";
 import { judgeRun } from "@/lib/evaluation/judge";
-import type { BandInForce } from "@/lib/evaluation/types";
+import type { BandInForce, JudgedQuantity } from "@/lib/evaluation/types";
 import type { RunSubmission } from "@/lib/validation/submission";
 
 export interface StoreRunsContext {
@@ -24,7 +24,7 @@ export interface StoreRunsContext {
  * for the other raw data and one for the judged quantities. A 200-run build
  * costs the same handful of round trips as a 5-run one.
  */
-export async function storeRuns(trx: Knex.Transaction, ctx: StoreRunsContext): Promise<number[]> {
+export async function storeRuns(trx: Knex.Transaction, ctx: StoreRunsContext): Promise<{ runIds: number[]; alarming: boolean }> {
   const { build, runs, derived } = ctx;
   const judged = runs.map((run, i) => judgeOne(run, derived[i], ctx));
 
@@ -54,7 +54,16 @@ export async function storeRuns(trx: Knex.Transaction, ctx: StoreRunsContext): P
       quantities: judged[i].quantities,
     })),
   });
-  return runIds;
+  return { runIds, alarming: runs.some((run, i) => isAlarming(run, judged[i].quantities)) };
+}
+
+/**
+ * Whether a run gives the release manager something to hear about: it did not
+ * complete, a quantity left its band, or a value drifts. The same three facts
+ * lib/mail/alert-facts.ts needsAlert() reads back from the stored build.
+ */
+function isAlarming(run: RunSubmission, quantities: readonly JudgedQuantity[]): boolean {
+  return run.status !== "COMPLETED" || quantities.some((q) => q.verdict === "outside" || (q.drift && q.driftReason !== null));
 }
 
 function judgeOne(run: RunSubmission, derivation: RunDerivation, ctx: StoreRunsContext) {
