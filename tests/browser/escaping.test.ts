@@ -11,8 +11,9 @@ import { openBrowserSession, type BrowserSession } from "@/tests/helpers/browser
 import { closeTestDb, testDb } from "@/tests/helpers/db";
 import { requireEnv } from "@/tests/helpers/env";
 import { postGraphQL } from "@/tests/helpers/graphql";
+import { signIn } from "@/tests/helpers/session";
 import { waitForStoredMail } from "@/tests/helpers/mail";
-import { plantHostileText, removeHostileText, signInEveryRole, type HostileText, type Planted } from "@/tests/integration/escaping-fixtures";
+import { plantHostileText, plantedPassword, removeHostileText, signInEveryRole, type HostileText, type Planted } from "@/tests/integration/escaping-fixtures";
 
 const baseUrl = requireEnv("TAULINE_TEST_URL");
 const TEXT: HostileText = {
@@ -48,14 +49,16 @@ afterAll(async () => {
   await closeTestDb();
 });
 
-/** A browser already signed in as `role`, with the session cookie the HTTP sign-in got. */
-async function browserAs(role: keyof Cookies): Promise<BrowserSession> {
+/** A browser that carries the session cookie an HTTP sign-in got. */
+async function browserWithCookie(cookie: string): Promise<BrowserSession> {
   const session = await openBrowserSession();
   sessions.push(session);
-  const pairs = cookies[role].split("; ").map((pair) => pair.split("=")) as [string, string][];
+  const pairs = cookie.split("; ").map((pair) => pair.split("="));
   await session.context.addCookies(pairs.map(([name, ...value]) => ({ name, value: value.join("="), url: baseUrl })));
   return session;
 }
+
+const browserAs = (role: keyof Cookies) => browserWithCookie(cookies[role]);
 
 /** `texts`: each text with the least number of times the page shows it (one per field named in the test). */
 async function expectShownAsText(session: BrowserSession, path: string, texts: [string, number][]) {
@@ -123,6 +126,11 @@ describe("free text on the pages", () => {
 
   it("is text on the developer's alert settings (subscribed branch)", async () => {
     await expectShownAsText(await browserAs("developer"), "/settings", [[TEXT.branch, 1]]);
+  });
+
+  it("is text in the page header of the person whose display name it is", async () => {
+    const session = await browserWithCookie(await signIn(planted.userEmail, plantedPassword(planted)));
+    await expectShownAsText(session, "/", [[TEXT.long, 1]]);
   });
 
   it("is text in the administrator's mailbox, whose message view cannot run scripts", async () => {

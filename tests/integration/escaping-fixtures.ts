@@ -83,7 +83,7 @@ export async function plantHostileText(text: HostileText, cookies: Cookies, { re
   await as("qa", "reevaluateBuilds", "mutation($input: ReevaluationInput!) { reevaluateBuilds(input: $input) { id } }", { input: { buildIds: [buildId], caseKey: "backstep", reason: text.long } });
 
   const userEmail = `esc-${tag}@fenwick-hydro.test`;
-  await as("admin", "createUser", "mutation($input: NewUserInput!) { createUser(input: $input) { id } }", { input: { name: text.long, email: userEmail, role: "developer", password: `escaping-${tag}-pw` } });
+  await as("admin", "createUser", "mutation($input: NewUserInput!) { createUser(input: $input) { id } }", { input: { name: text.long, email: userEmail, role: "developer", password: plantedPassword({ tag }) } });
   // Its own text (not a part of `long`), so a page can be checked for showing the token's name itself.
   const tokenName = `token ${text.short}`;
   await as("admin", "createCiToken", "mutation($input: CiTokenInput!) { createCiToken(input: $input) { token { id } } }", { input: { name: tokenName, expiresAt: null } });
@@ -94,6 +94,9 @@ export async function plantHostileText(text: HostileText, cookies: Cookies, { re
 
   return { tag, commit, buildId, runId: receipt.runs[0].id, caseKey, quantityKey, userEmail, tokenName, subscriptionId: subscription.saveAlertSubscription.id, waiverId: waiver.grantWaiver.id };
 }
+
+/** The password of the person plantHostileText creates (whose name is the hostile text). */
+export const plantedPassword = ({ tag }: { tag: string }) => `escaping-${tag}-pw`;
 
 /** Takes out what plantHostileText made, so the shared demo database stays as it was. */
 export async function removeHostileText(p: Planted): Promise<void> {
