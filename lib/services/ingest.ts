@@ -43,14 +43,17 @@ export async function submitResults({
   const input = parseSubmission(unsafeInput);
   const db = getDb();
 
-  const [cases, modelKeys] = await Promise.all([
-    getCases({ db, keys: [...new Set(input.runs.map((r) => r.case))] }),
+  // The library lookups are independent, so they go out together: bands are read
+  // for the case keys as posted (an unknown key finds none and is refused below).
+  const caseKeys = [...new Set(input.runs.map((r) => r.case))];
+  const [cases, modelKeys, bands] = await Promise.all([
+    getCases({ db, keys: caseKeys }),
     getModelKeys({ db }),
+    getBandsInForce({ db, caseKeys, at: receivedAt }),
   ]);
   const caseByKey = new Map(cases.map((c) => [c.key, c]));
   checkReferences(input, caseByKey, modelKeys);
 
-  const bands = await getBandsInForce({ db, caseKeys: [...caseByKey.keys()], at: receivedAt });
   const derived = input.runs.map((run) => deriveRunQuantities(run, settingsLookup(run, caseByKey.get(run.case)!, bands)));
 
   const outcome = await db.transaction(async (trx) => {
