@@ -7,7 +7,9 @@ import type { Verdict } from "@/lib/analysis";
 // unit, in one statement. The columns are named as the type's fields, so the
 // rows go to the client through default resolvers: a build of 200 runs × 35
 // quantities is 7,000 objects, and a resolver function (worse, a promise) per
-// field of each was most of build(id)'s time (issue 5, build_ratio).
+// field of each was most of build(id)'s time (issue 5, build_ratio). The fit
+// details stay text until asked for: pg would otherwise parse 7,000 JSON
+// documents that the build page never shows.
 
 export interface RunQuantityRow {
   id: number;
@@ -33,7 +35,8 @@ export interface RunQuantityRow {
   driftReason: "baseline" | "trend" | null;
   driftPValue: number | null;
   driftSlope: number | null;
-  details: Record<string, unknown>;
+  /** The fit details as JSON text: parsed only when a client asks for them (resolvers/types.ts). */
+  detailsJson: string;
 }
 
 /** Every quantity of the given runs, by run then quantity key. */
@@ -44,7 +47,7 @@ export async function getRunQuantitiesByRunIds({ db, runIds }: { db: Db; runIds:
             v.band_id as "bandId", d.kind as "bandKind", d.model_key as "bandModel", d.reference, d.source, d.lower, d.upper,
             d.marginal_margin as "marginalMargin", v.baseline_build_id as "baselineBuildId", v.baseline_value as "baselineValue",
             v.baseline_delta as "baselineDelta", v.drift, v.drift_reason as "driftReason", v.drift_p_value as "driftPValue",
-            v.drift_slope as "driftSlope", v.details
+            v.drift_slope as "driftSlope", v.details::text as "detailsJson"
        from quantity_values as v
        left join bands as d on d.id = v.band_id
        left join quantity_definitions as q on q.key = v.quantity_key

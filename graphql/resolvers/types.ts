@@ -48,6 +48,7 @@ export const QuantityValue = {
   band: (q: RunQuantityRow, _: unknown, ctx: Ctx) => (q.bandId === null ? null : ctx.loaders.band.load(q.bandId)),
   deviation: (q: RunQuantityRow) => deviationFromReference(q.value, q.reference)?.absolute ?? null,
   deviationPct: (q: RunQuantityRow) => deviationFromReference(q.value, q.reference)?.relativePct ?? null,
+  details: (q: RunQuantityRow): unknown => JSON.parse(q.detailsJson),
 };
 
 export const Band = {
