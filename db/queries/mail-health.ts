@@ -1,9 +1,9 @@
 import "server-only";
 import type { Db } from "../index";
 
-// Read-only facts about the mail path for /api/health (lib/jobs/health.ts):
-// the outbox backlog and the pg-boss jobs of our queues. Both are small
-// aggregates; the caller caches them for a few seconds.
+// Read-only facts about the mail path for lib/jobs: the outbox backlog and the
+// pg-boss jobs of our queues for /api/health (small aggregates, cached by the
+// caller for a few seconds), and the queued rows a starting worker picks up.
 
 export interface OutboxBacklog {
   unsent: number;
@@ -31,4 +31,15 @@ export async function countQueueJobs({ db, schema, queues }: { db: Db; schema: s
     [queues],
   );
   return rows;
+}
+
+/**
+ * Rows still waiting for their first attempt, whatever their due time. A row is
+ * due a minute after it was queued (the nudge after commit normally sends it at
+ * once); when the process died between commit and nudge, nobody would look at
+ * it before that minute and the next sweep tick.
+ */
+export async function listQueuedOutboxIds({ db, limit }: { db: Db; limit: number }): Promise<number[]> {
+  const rows: { id: number }[] = await db("mail_outbox").where({ status: "queued" }).orderBy("id").limit(limit).select("id");
+  return rows.map((r) => Number(r.id));
 }

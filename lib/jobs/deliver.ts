@@ -1,5 +1,6 @@
 import "server-only";
 import { getDb } from "@/db";
+import { listQueuedOutboxIds } from "@/db/queries/mail-health";
 import { claimOutboxMessage, listOverdueOutboxIds, markOutboxFailed, markOutboxSent } from "@/db/queries/outbox";
 import { getLogger } from "@/lib/log";
 import { sendOutboxRow } from "@/lib/mail/transport";
@@ -34,6 +35,18 @@ export async function deliverOutboxMessage({ outboxId, retryCount = 0 }: { outbo
 /** Hands every overdue outbox row to the delivery queue again (lost nudge, exhausted retries, dead sender). */
 export async function sweepOutbox(): Promise<number> {
   const ids = await listOverdueOutboxIds({ db: getDb(), limit: 500 });
+  await nudgeMailDelivery(ids);
+  return ids.length;
+}
+
+/**
+ * At worker start: every row not yet tried is handed to the queue now, besides
+ * the overdue ones, so mail committed just before a crash (its nudge lost) goes
+ * out when an instance is back, not a minute or two later. A row that already
+ * has a job gets at most a second one, and the claim lets only one of them send.
+ */
+export async function recoverQueuedMail(): Promise<number> {
+  const ids = [...new Set([...(await listQueuedOutboxIds({ db: getDb(), limit: 500 })), ...(await listOverdueOutboxIds({ db: getDb(), limit: 500 }))])];
   await nudgeMailDelivery(ids);
   return ids.length;
 }

@@ -1,7 +1,7 @@
 import "server-only";
 import { getLogger, runWithRequestId } from "@/lib/log";
 import { getBoss } from "./boss";
-import { deliverOutboxMessage, sweepOutbox } from "./deliver";
+import { deliverOutboxMessage, recoverQueuedMail, sweepOutbox } from "./deliver";
 import { sendPendingDigests } from "./digest";
 import { DELIVER_QUEUE, DIGEST_CRON, DIGEST_QUEUE, SWEEP_CRON, SWEEP_QUEUE } from "./queues";
 
@@ -45,8 +45,9 @@ async function registerWorkers(): Promise<void> {
   // sends each cron tick once.
   await boss.schedule(SWEEP_QUEUE, SWEEP_CRON, {}, { tz: "UTC" });
   await boss.schedule(DIGEST_QUEUE, DIGEST_CRON, {}, { tz: "UTC" });
-  // Mail queued while no instance was running goes out now, not at the first tick.
-  await sweepOutbox();
+  // Mail queued while no instance was running, or whose nudge died with the
+  // process that committed it, goes out now, not at the first sweep tick.
+  await recoverQueuedMail();
 }
 
 /** Starts the worker once per process; a failed start (database not up yet) is logged and tried again in 30 s. */

@@ -19,6 +19,10 @@ export async function outboxOfBuilds(db: Knex, buildIds: number[]): Promise<Outb
   return db("mail_outbox").whereIn("build_id", buildIds).orderBy("id").select("id", "event_key", "status", "attempts", "build_id");
 }
 
+export async function outboxByIds(db: Knex, ids: number[]): Promise<OutboxFact[]> {
+  return db("mail_outbox").whereIn("id", ids).orderBy("id").select("id", "event_key", "status", "attempts", "build_id");
+}
+
 /** Delivery jobs of these outbox rows that are waiting, retrying or running. */
 export async function openDeliveryJobs(db: Knex, outboxIds: number[]): Promise<{ state: string; outbox_id: number }[]> {
   if (outboxIds.length === 0) return [];

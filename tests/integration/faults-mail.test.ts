@@ -2,7 +2,8 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { randomCommit } from "../helpers/graphql";
 import { startStack, type TestStack } from "../helpers/stack";
 import { getHealth, outsideDecayRun, postAt, submitBody, type Receipt } from "../helpers/stack-http";
-import { copiesPerEvent, openDeliveryJobs, outboxOfBuilds, waitForEvents } from "../helpers/stack-outbox";
+import { insertOutboxMessage } from "@/db/queries/outbox";
+import { copiesPerEvent, openDeliveryJobs, outboxByIds, outboxOfBuilds, waitForEvents } from "../helpers/stack-outbox";
 import { countMailByEvent } from "../helpers/stack-mail";
 import { waitUntil } from "../helpers/stack-process";
 
@@ -37,10 +38,15 @@ async function postOutsideBuild(commit: string, cEps2 = 1.87): Promise<number> {
 async function expectSentOnce(buildIds: number[]): Promise<void> {
   const rows = await outboxOfBuilds(stack.db, buildIds);
   expect(rows).toHaveLength(buildIds.length);
+  await expectRowsSentOnce(rows.map((r) => r.id));
+}
+
+async function expectRowsSentOnce(ids: number[], timeoutMs = 40_000): Promise<void> {
+  const rows = await outboxByIds(stack.db, ids);
   const keys = rows.map((r) => r.event_key);
-  await waitForEvents(stack.mailDir, keys);
-  await waitUntil("the outbox rows to be marked sent", async () => (await outboxOfBuilds(stack.db, buildIds)).every((r) => r.status === "sent"), { timeoutMs: 10_000 });
-  expect(await openDeliveryJobs(stack.db, rows.map((r) => r.id))).toEqual([]);
+  await waitForEvents(stack.mailDir, keys, timeoutMs);
+  await waitUntil("the outbox rows to be marked sent", async () => (await outboxByIds(stack.db, ids)).every((r) => r.status === "sent"), { timeoutMs: 10_000 });
+  expect(await openDeliveryJobs(stack.db, ids)).toEqual([]);
   await sleep(2000); // a late duplicate would be on disk by now
   expect(await copiesPerEvent(stack.mailDir, keys)).toEqual(keys.map(() => 1));
 }
@@ -90,5 +96,20 @@ describe.sequential("mail faults", () => {
     await stack.startApp(0);
     await stack.waitForWorker(0);
     await expectSentOnce(buildIds);
+  });
+
+  it("sends mail committed just before a crash, whose nudge never ran, as soon as an instance starts (not at the row's due minute)", async () => {
+    await stack.stopApp(0, "SIGKILL");
+    // The row exactly as a submission's transaction writes it (due in one minute, no job yet).
+    const eventKey = `notice:lost-nudge:${randomCommit().slice(0, 12)}`;
+    const { id } = await insertOutboxMessage({
+      db: stack.db,
+      message: { eventKey, kind: "notice", recipients: ["release@fenwick-hydro.test"], subject: "queued before the crash", text: "x", html: "<p>x</p>" },
+    });
+    expect(id).not.toBeNull();
+    expect(await openDeliveryJobs(stack.db, [id!])).toEqual([]);
+    await stack.startApp(0);
+    // Well inside the minute: the starting worker picked the row up itself.
+    await expectRowsSentOnce([id!], 30_000);
   });
 });
