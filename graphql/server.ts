@@ -40,6 +40,10 @@ export const yoga = createYoga<ServerContext, GraphQLContext>({
   // One operation per request: no client of ours batches, and a batch of
   // thousands of cheap queries would slip past every per-document limit.
   batching: false,
+  // No CORS: the API serves its own pages and CI, never another site's scripts.
+  // (yoga's default grants every origin's preflight, with credentials, which
+  // would void the custom-header argument of the request gate.)
+  cors: false,
   // yoga's own streamed limit (25 MB by default, which quietly undercut
   // MAX_BODY_BYTES) set to the same figure: the route's counter answers first,
   // this one still guards in-process callers of yoga.fetch.

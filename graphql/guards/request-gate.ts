@@ -9,7 +9,8 @@ import { getEnv } from "@/lib/env";
 //     and on same-origin POSTs; an Origin that is neither APP_URL nor the
 //     server's own host is a page on another site riding on the user's cookie
 //     (a JSON fetch with a forged content type, a form) and is refused with 403.
-//     CI posts send no Origin and are not affected.
+//     CI posts send no Origin and are not affected. A CORS preflight (OPTIONS)
+//     from another site is refused here too; yoga's own CORS is off.
 //  3. the custom header: form-like requests (multipart, GET) must carry
 //     x-tauline-request, which another site's page cannot set without a CORS
 //     preflight we never grant; without it, 403.
@@ -34,7 +35,6 @@ function allowedOrigins(request: Request): Set<string> {
 /** The refusal for a request that fails the gate, or null when it may go on to GraphQL. */
 export function checkGraphQLRequest(request: Request): Response | null {
   const method = request.method.toUpperCase();
-  if (method === "OPTIONS") return null;
   const mediaType = mediaTypeOf(request.headers);
   if (method === "POST" && !ACCEPTED_BODIES.includes(mediaType)) {
     return refuse(

@@ -82,6 +82,16 @@ describe("cross-site requests carrying a session cookie", () => {
     }
   });
 
+  it("grants no CORS preflight to another site, so its scripts cannot add the custom header or read answers", async () => {
+    const preflight = await send("/api/graphql", {
+      method: "OPTIONS",
+      headers: { origin: "https://evil.example", "access-control-request-method": "POST", "access-control-request-headers": "content-type,x-tauline-request" },
+    });
+    expect(preflight.headers.get("access-control-allow-origin")).toBeNull();
+    expect(preflight.headers.get("access-control-allow-credentials")).toBeNull();
+    expect(preflight.status).toBe(403);
+  });
+
   it("keeps CI posts working: bearer token, no cookie, no Origin", async () => {
     const commit = randomCommit();
     const answer = await postJson(submission(commit), { authorization: `Bearer ${ciToken()}` });
