@@ -1,9 +1,10 @@
 import { existsSync, readFileSync } from "node:fs";
-import path from "node:path";
 import { randomBytes } from "node:crypto";
 import { beforeAll, describe, expect, it } from "vitest";
+import { requireEnv } from "../helpers/env";
 import { SUBMIT, ciToken, postGraphQL, randomCommit } from "../helpers/graphql";
 import { signIn } from "../helpers/session";
+import { listeningPid, serverLogPath } from "./http-server-process";
 
 // build(id) must cost the same number of SQL statements whatever its run count
 // (issue 5: no per-run or per-value queries; loaders batch, joins shape). A
@@ -18,8 +19,9 @@ import { signIn } from "../helpers/session";
 // carrying the request's id (lib/http/request-log.ts takes it from our
 // x-request-id header). The test sends a random request id and reads that
 // line from the server's log: other requests' statements never land in it.
-// The log is the one scripts/test.sh gives `next start`
-// (.data/run/test-web.log); TAULINE_WEB_LOG names another (the dev server's).
+// The log is the file the server listening on TAULINE_TEST_URL's port writes
+// its standard output to (found through /proc, as http-request-log.test.ts
+// does); TAULINE_WEB_LOG overrides it.
 
 const branch = "test/build-statements";
 
@@ -37,8 +39,12 @@ const QUERY = /* GraphQL */ `
   }
 `;
 
-function webLogPath(): string {
-  return process.env.TAULINE_WEB_LOG ?? path.resolve(".data/run/test-web.log");
+async function webLogPath(): Promise<string> {
+  if (process.env.TAULINE_WEB_LOG) return process.env.TAULINE_WEB_LOG;
+  const pid = await listeningPid(new URL(requireEnv("TAULINE_TEST_URL")).port);
+  const log = serverLogPath(pid);
+  if (!log) throw new Error(`the server (pid ${pid}) does not write its log to a file; set TAULINE_WEB_LOG`);
+  return log;
 }
 
 /** Flat-plate runs on distinct grids, each reporting two scalars (one banded, one not). */
@@ -72,7 +78,7 @@ async function countStatements(buildId: string, cookie: string, expectedRuns: nu
   const res = await postGraphQL<{ build: { runs: { quantities: unknown[] }[] } }>({ query: QUERY, variables: { id: buildId }, cookie, headers: { "x-request-id": requestId } });
   expect(res.body.errors).toBeUndefined();
   expect(res.body.data!.build.runs).toHaveLength(expectedRuns);
-  const log = webLogPath();
+  const log = await webLogPath();
   // pino writes as the request ends; allow the line a moment to reach the file.
   for (let attempt = 0; attempt < 50; attempt++) {
     const found = existsSync(log) ? findCount(readFileSync(log, "utf8"), requestId) : null;
