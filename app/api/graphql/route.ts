@@ -24,7 +24,10 @@ async function handle(request: Request, note: RequestNote): Promise<Response> {
   const declared = checkDeclaredLength(request.headers, limit);
   if (declared) return tooLarge(declared);
   const limited = limitRequestBody(request, limit);
-  const answer = await Promise.race([yoga.handleRequest(limited.request, { request: limited.request, note }), limited.overflow]);
+  const answering = Promise.resolve(yoga.handleRequest(limited.request, { request: limited.request, note }));
+  // Once the overflow has answered, yoga's own outcome is of no interest.
+  answering.catch(() => undefined);
+  const answer = await Promise.race([answering, limited.overflow]);
   if (answer instanceof BodyTooLargeError) return tooLarge(answer);
   // yoga may have answered (400, invalid body) from the failed stream a moment before the race saw the overflow.
   if (limited.exceeded()) return tooLarge(await limited.overflow);
