@@ -22,7 +22,10 @@ async function main() {
   const token = requireEnv("TAULINE_CI_TOKEN");
   const generated = generateBenchRuns(runs, "profile");
   let n = 0;
-  const body = () => graphQLBody(SUBMIT, { input: { ...withFreshBuild(generated, `profile-${process.pid}-${Date.now()}-${n++}`), build: { ...withFreshBuild(generated, `p${n}-${Date.now()}`).build, branch: "bench/profile" } } });
+  const body = () => {
+    const input = withFreshBuild(generated, `profile-${process.pid}-${Date.now()}-${n++}`);
+    return graphQLBody(SUBMIT, { input: { ...input, build: { ...input.build, branch: "bench/profile" } } });
+  };
 
   const endpointBodies = Array.from({ length: repeats + 1 }, body);
   let e = 0;
