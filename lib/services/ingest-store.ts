@@ -10,6 +10,8 @@ import type { RunSubmission } from "@/lib/validation/submission";
 
 export interface StoreRunsContext {
   build: { id: number; branch: string; received_at: Date };
+  /** The build was created by this submission: it has no earlier runs to replace. */
+  created: boolean;
   runs: readonly RunSubmission[];
   derived: readonly RunDerivation[];
   bandsFor: (run: RunSubmission) => Map<string, BandInForce>;
@@ -28,7 +30,7 @@ export async function storeRuns(trx: Knex.Transaction, ctx: StoreRunsContext): P
   const { build, runs, derived } = ctx;
   const judged = runs.map((run, i) => judgeOne(run, derived[i], ctx));
 
-  await deleteRunsByKeys({ db: trx, buildId: build.id, runs });
+  if (!ctx.created) await deleteRunsByKeys({ db: trx, buildId: build.id, runs });
   const runIds = await insertRuns({
     db: trx,
     buildId: build.id,

@@ -75,6 +75,7 @@ export async function submitResults({
 
     const { runIds, alarming } = await storeRuns(trx, {
       build,
+      created,
       runs: input.runs,
       derived,
       bandsFor: (run) => bandsForRun(run, bands),
