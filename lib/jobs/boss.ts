@@ -1,5 +1,6 @@
 import "server-only";
 import PgBoss from "pg-boss";
+import { getDb } from "@/db";
 import { getEnv } from "@/lib/env";
 import { getLogger } from "@/lib/log";
 import { DELIVER_QUEUE, DELIVER_RETRY, DIGEST_QUEUE, SWEEP_QUEUE } from "./queues";
@@ -30,11 +31,15 @@ function logBossError(error: Error): void {
   suppressedErrors = 0;
 }
 
-async function startBoss(): Promise<PgBoss> {
-  const boss = new PgBoss({ connectionString: getEnv().DATABASE_URL, schema: BOSS_SCHEMA, max: 4, application_name: "tauline-jobs" });
-  // An error here is a failed poll or maintenance run; pg-boss keeps going and
-  // the outbox keeps the mail, so it is logged and not thrown.
-  boss.on("error", logBossError);
+// pg-boss's start (schema check) and our createQueue/updateQueue calls create
+// partitions and rows; two instances doing it at the same moment on a fresh
+// database deadlocked ("deadlock detected", found by the two-instance fault
+// test), leaving one instance without a worker for the 30 s retry. The set-up
+// is therefore serialised across instances by a transaction-scoped advisory
+// lock held on one of the app's connections while pg-boss does its work.
+const SETUP_LOCK_SQL = "select pg_advisory_xact_lock(hashtext('tauline.jobs.setup'))";
+
+async function setUpQueues(boss: PgBoss): Promise<void> {
   await boss.start();
   // 'short': at most one waiting job per outbox row (singleton key); a second
   // nudge for the same row while one waits is dropped by pg-boss.
@@ -44,6 +49,23 @@ async function startBoss(): Promise<PgBoss> {
   // Sweep and digest: one waiting job at a time is enough.
   for (const name of [SWEEP_QUEUE, DIGEST_QUEUE]) {
     await boss.createQueue(name, { name, policy: "short", retryLimit: 2, retryDelay: 30, expireInSeconds: 300 });
+  }
+}
+
+async function startBoss(): Promise<PgBoss> {
+  const boss = new PgBoss({ connectionString: getEnv().DATABASE_URL, schema: BOSS_SCHEMA, max: 4, application_name: "tauline-jobs" });
+  // An error here is a failed poll or maintenance run; pg-boss keeps going and
+  // the outbox keeps the mail, so it is logged and not thrown.
+  boss.on("error", logBossError);
+  try {
+    await getDb().transaction(async (trx) => {
+      await trx.raw(SETUP_LOCK_SQL);
+      await setUpQueues(boss);
+    });
+  } catch (error) {
+    // A half-started pg-boss keeps timers and a pool: stop it before the next try makes another.
+    await boss.stop({ graceful: false, wait: false }).catch(() => undefined);
+    throw error;
   }
   return boss;
 }

@@ -17,7 +17,7 @@ export interface MailWorkerState {
   lastError: string | null;
 }
 
-const globalForWorker = globalThis as unknown as { taulineMailWorker?: Promise<void>; taulineMailWorkerState?: MailWorkerState };
+const globalForWorker = globalThis as unknown as { taulineMailWorker?: Promise<void>; taulineMailWorkerState?: MailWorkerState; taulineMailWorkerFailures?: number };
 
 function setWorkerState(state: MailWorkerState["state"], lastError: string | null = null): void {
   globalForWorker.taulineMailWorkerState = { state, since: new Date().toISOString(), lastError };
@@ -50,21 +50,26 @@ async function registerWorkers(): Promise<void> {
   await recoverQueuedMail();
 }
 
-/** Starts the worker once per process; a failed start (database not up yet) is logged and tried again in 30 s. */
+/** Starts the worker once per process; a failed start (database not up yet) is logged and tried again with backoff up to 30 s. */
 export function startMailWorker(): Promise<void> {
   if (!globalForWorker.taulineMailWorker) {
     if (globalForWorker.taulineMailWorkerState?.state !== "retrying") setWorkerState("starting");
     globalForWorker.taulineMailWorker = registerWorkers().then(
       () => {
+        globalForWorker.taulineMailWorkerFailures = 0;
         setWorkerState("running");
         getLogger().info({ component: "mail-worker" }, "mail worker running");
       },
       (error: unknown) => {
         globalForWorker.taulineMailWorker = undefined;
         const message = error instanceof Error ? error.message : String(error);
+        // 2 s, 4 s, 8 s … 30 s: a database that is still starting is usually there within seconds.
+        const attempt = (globalForWorker.taulineMailWorkerFailures ?? 0) + 1;
+        globalForWorker.taulineMailWorkerFailures = attempt;
+        const delayMs = Math.min(30_000, 1000 * 2 ** attempt);
         setWorkerState("retrying", message);
-        getLogger().error({ component: "mail-worker", err: message }, "the mail worker did not start; trying again in 30 s");
-        setTimeout(() => void startMailWorker(), 30_000).unref();
+        getLogger().error({ component: "mail-worker", err: message, attempt, retryInMs: delayMs }, "the mail worker did not start; trying again");
+        setTimeout(() => void startMailWorker(), delayMs).unref();
       },
     );
   }
