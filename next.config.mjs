@@ -21,7 +21,9 @@ const nextConfig = {
   reactStrictMode: true,
   poweredByHeader: false,
   // pg and knex load optional drivers dynamically; keep them out of the bundle.
-  serverExternalPackages: ["knex", "pg", "pg-query-stream", "pg-copy-streams", "bcryptjs", "nodemailer", "pino", "pg-boss"],
+  // graphql too: graphql-jit (CommonJS) and the schema (ESM) must share one copy
+  // of it, or type checks across the two copies fail (graphql/plugins/execution.ts).
+  serverExternalPackages: ["graphql", "knex", "pg", "pg-query-stream", "pg-copy-streams", "bcryptjs", "nodemailer", "pino", "pg-boss"],
   typedRoutes: false,
   async headers() {
     return [
