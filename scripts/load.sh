@@ -90,5 +90,8 @@ build_web
 : >"$RUN_DIR/load-web.log"
 start_web "$web_pid_file" "$RUN_DIR/load-web.log"
 
+# For the server's peak memory in the report.
+export LOAD_WEB_PID
+LOAD_WEB_PID="$(cat "$web_pid_file")"
 say "running the load against $APP_URL (server log: $RUN_DIR/load-web.log)"
 ./node_modules/.bin/tsx --conditions=react-server scripts/load/main.ts "$@"

@@ -6,6 +6,7 @@ import { createRandomCommit, generateBodyPool } from "./payload";
 import { createReaderOptions, readReaderTargets } from "./readers";
 import { createRecorder, type Recorder } from "./recorder";
 import { describeMachine, printReport, writeReport, type GroupReport, type LoadReport } from "./report";
+import { readServerPeakRssMb } from "./server-memory";
 import { summariseKinds } from "./stats";
 import { checkDatabase } from "./verify";
 
@@ -72,6 +73,7 @@ async function main(): Promise<number> {
     payloadBytes: { min: Math.min(...sizes), max: Math.max(...sizes) },
     groups,
     errors,
+    serverPeakRssMb: readServerPeakRssMb(),
     database,
     passed: errors === 0 && database.ok,
   };

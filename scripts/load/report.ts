@@ -28,6 +28,7 @@ export interface LoadReport {
   payloadBytes: { min: number; max: number };
   groups: GroupReport[];
   errors: number;
+  serverPeakRssMb: number | null;
   database: DatabaseCheck;
   passed: boolean;
 }
@@ -38,7 +39,7 @@ export function printReport(r: LoadReport): void {
   const s = r.settings;
   console.log(`\nload: ${s.ciClients} CI clients + ${s.readers} readers for ${s.durationSeconds} s against ${r.url}`);
   console.log(`      submissions of ${(r.payloadBytes.min / 1e3).toFixed(0)}-${(r.payloadBytes.max / 1e3).toFixed(0)} kB, a new commit each; ${r.machine.cpus} cores, Node ${r.machine.node}`);
-  const header = ["group", "kind", "answers", "errors", "p50 ms", "p99 ms", "max ms", "req/s", "MB/s"];
+  const header = ["group", "kind", "answers", "errors", "p50 ms", "p99 ms", "max ms", "req/s", "answer MB/s"];
   const rows: string[][] = [];
   for (const g of r.groups) {
     for (const k of g.kinds) rows.push([g.group, k.kind, ...cells(k, k.non2xx + k.bodyErrors)]);
@@ -55,6 +56,7 @@ export function printReport(r: LoadReport): void {
     const messages = Object.entries(g.total.messages).sort((a, b) => b[1] - a[1]).slice(0, 8);
     for (const [m, n] of messages) console.log(`  ${String(n).padStart(6)} × ${m}`);
   }
+  if (r.serverPeakRssMb !== null) console.log(`server peak RSS (next start and its children): ${r.serverPeakRssMb.toFixed(0)} MB`);
   const d = r.database;
   console.log(
     `database: acknowledged ${d.acknowledgedBuilds} builds / ${d.acknowledgedRuns} runs; stored under the load's branches ${d.storedBuilds} builds / ${d.storedRuns} runs; ` +
