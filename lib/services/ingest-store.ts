@@ -51,10 +51,7 @@ export async function storeRuns(trx: Knex.Transaction, ctx: StoreRunsContext): P
   await insertQuantityValues({
     db: trx,
     build: { id: build.id, branch: build.branch, receivedAt: build.received_at },
-    runs: runs.map((run, i) => ({
-      run: { id: runIds[i], caseKey: run.case, modelKey: run.model, grid: run.grid },
-      quantities: judged[i].quantities,
-    })),
+    runs: runs.map((_, i) => ({ runId: runIds[i], quantities: judged[i].quantities })),
   });
   return { runIds, alarming: runs.some((run, i) => isAlarming(run, judged[i].quantities)) };
 }
