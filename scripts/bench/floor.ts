@@ -11,8 +11,8 @@ import type { RunSubmission } from "@/lib/validation/submission";
 // the same lib/analysis derivations (deriveRunQuantities), and write the same
 // rows (build, runs, run_series as float8[], run_coefficients, quantity_values)
 // in one transaction with the fastest path the schema allows: series by binary
-// COPY (the same encoder the endpoint uses), quantity values by one unnest
-// insert (as the endpoint), the few runs and coefficients by multi-row inserts.
+// COPY (the same encoder the endpoint uses), quantity values as one JSON
+// document (as the endpoint), the few runs and coefficients by multi-row inserts.
 // No GraphQL, no zod, no judging against bands (every value is stored 'unbanded').
 
 // PostgreSQL allows at most 65,535 bind parameters per statement.
@@ -41,25 +41,14 @@ export async function writeFloorSubmission(client: Client, body: string, caseSet
     await pipeline(Readable.from(encodeSeriesCopy(seriesRows)), client.query(copyFrom("COPY run_series (run_id, key, x, y) FROM STDIN (FORMAT binary)")));
     const coefficientRows = runs.flatMap((r, i) => (r.coefficients ?? []).map((c) => [runIds[i], c.name, c.value]));
     await insertRows(client, "run_coefficients (run_id, name, value)", coefficientRows);
-    // The endpoint's own way for thousands of rows: one array per column, unnested (no bind-parameter limit, one statement).
-    const values = runs.flatMap((r, i) => derived[i].quantities.map((q) => ({ runId: runIds[i], r, q })));
+    // The endpoint's own way for thousands of rows: one JSON document unpacked by json_to_recordset.
+    const values = runs.flatMap((r, i) => derived[i].quantities.map((q) => ({ r: runIds[i], k: q.key, v: q.value, o: q.origin, dt: q.details })));
     await client.query(
       `insert into quantity_values (build_id, branch, build_received_at, run_id, case_key, model_key, grid, quantity_key, value, origin, verdict, details)
-       select $1::bigint, $2::text, $3::timestamptz, r, c, m, g, k, v, o, 'unbanded', d::jsonb
-         from unnest($4::bigint[], $5::text[], $6::text[], $7::text[], $8::text[], $9::float8[], $10::text[], $11::text[]) as u(r, c, m, g, k, v, o, d)`,
-      [
-        buildId,
-        build.branch,
-        receivedAt,
-        values.map((x) => x.runId),
-        values.map((x) => x.r.case),
-        values.map((x) => x.r.model),
-        values.map((x) => x.r.grid ?? "default"),
-        values.map((x) => x.q.key),
-        values.map((x) => x.q.value),
-        values.map((x) => x.q.origin),
-        values.map((x) => JSON.stringify(x.q.details)),
-      ],
+       select $1::bigint, $2::text, $3::timestamptz, x.r, run.case_key, run.model_key, run.grid, x.k, x.v, x.o, 'unbanded', coalesce(x.dt, '{}')
+         from json_to_recordset($4::json) as x(r bigint, k text, v float8, o text, dt jsonb)
+         join runs run on run.id = x.r`,
+      [buildId, build.branch, receivedAt, JSON.stringify(values)],
     );
     await client.query("commit");
   } catch (error) {
