@@ -16,6 +16,10 @@ set -euo pipefail
 # shellcheck source=scripts/lib/load.sh
 source "$(dirname "${BASH_SOURCE[0]}")/lib/load.sh"
 cd "$TAULINE_ROOT"
+# Usage needs no database, build or server.
+case " $* " in
+  *" --help "*) exec ./node_modules/.bin/tsx --conditions=react-server scripts/load/main.ts --help ;;
+esac
 
 ensure_data_dirs
 # One load run at a time per checkout (they share the ports and the build).
