@@ -3,7 +3,7 @@ import type { FitSettings } from "@/lib/evaluation/types";
 import { graphQLBody, postGraphQLBody, readServerPeakRssMb, requireEnv, appUrl } from "./http";
 import { writeFloorSubmission } from "./floor";
 import { generateBenchRuns, withFreshBuild } from "./payload";
-import { ratio, timeRepeated, type Timing } from "./stats";
+import { ratio, summarise, timeOnce, timeRepeated, type Timing } from "./stats";
 
 // Section 1: the CI ingest through real HTTP against its floor.
 
@@ -18,6 +18,13 @@ export interface IngestSize {
   ingestRatio: number;
   serverPeakRssMb: number;
   lastBuildId: string;
+  /**
+   * The bare route (see benchBareRoute) timed in the same loop, one request
+   * beside each submission, with a body of this submission's size: the fair
+   * denominator for "small ingest / bare route" on a machine with shared CPU.
+   */
+  bare: Timing;
+  smallVsBare: number;
 }
 
 export async function benchIngest({ runs, repeats, label }: { runs: number; repeats: number; label: string }): Promise<IngestSize> {
@@ -29,23 +36,41 @@ export async function benchIngest({ runs, repeats, label }: { runs: number; repe
   const token = requireEnv("TAULINE_CI_TOKEN");
 
   let lastBuildId = "";
-  const bodies: string[] = [];
-  for (let i = 0; i < repeats + 1; i++) bodies.push(bodyFor("endpoint"));
-  let next = 0;
-  const endpoint = await timeRepeated(async () => {
-    const data = (await postGraphQLBody(bodies[next++], { token })) as { submitResults: { build: { id: string } } };
-    lastBuildId = data.submitResults.build.id;
-  }, repeats);
-  const serverPeakRssMb = readServerPeakRssMb();
-
+  const endpointBodies = Array.from({ length: repeats + 1 }, () => bodyFor("endpoint"));
+  const floorBodies = Array.from({ length: repeats + 1 }, () => bodyFor("floor"));
   const client = new Client({ connectionString: requireEnv("DATABASE_URL") });
   await client.connect();
   try {
     const settings = await readCaseSettings(client);
-    const floorBodies: string[] = [];
-    for (let i = 0; i < repeats + 1; i++) floorBodies.push(bodyFor("floor"));
-    let f = 0;
-    const floor = await timeRepeated(() => writeFloorSubmission(client, floorBodies[f++], settings), repeats);
+    // Endpoint and floor alternate, post for post: on a machine whose CPU is
+    // shared, a burst of load then slows both sides of the ratio alike instead of
+    // landing on whichever ran during it.
+    const endpointSamples: number[] = [];
+    const floorSamples: number[] = [];
+    const bareSamples: number[] = [];
+    const bareBody = graphQLBody(BARE_QUERY, { input: withFreshBuild(generated, `${label}-bare-${process.pid}`) });
+    // Warm-up pairs (not timed): a fresh server loads route chunks and compiles
+    // the ingest path on its first posts; a CI server answers warm.
+    const warmups = runs <= 20 ? 3 : 1;
+    for (let i = 0; i < warmups; i++) {
+      await postGraphQLBody(bodyFor("warm-up"), { token });
+      await writeFloorSubmission(client, bodyFor("warm-up"), settings);
+      await postGraphQLBody(bareBody, { token });
+    }
+    for (let i = 1; i <= repeats; i++) {
+      const e = await timeOnce(async () => {
+        const data = (await postGraphQLBody(endpointBodies[i], { token })) as { submitResults: { build: { id: string } } };
+        lastBuildId = data.submitResults.build.id;
+      });
+      const f = await timeOnce(() => writeFloorSubmission(client, floorBodies[i], settings));
+      endpointSamples.push(e);
+      floorSamples.push(f);
+      bareSamples.push(await timeOnce(() => postGraphQLBody(bareBody, { token })));
+    }
+    const endpoint = summarise(endpointSamples);
+    const floor = summarise(floorSamples);
+    const bare = summarise(bareSamples);
+    console.log(`[bench] ${label}: endpoint ${endpoint.median.toFixed(1)} ms, floor ${floor.median.toFixed(1)} ms, bare route (same body size) ${bare.median.toFixed(1)} ms — medians of ${repeats} interleaved samples`);
     return {
       label,
       runs,
@@ -53,8 +78,10 @@ export async function benchIngest({ runs, repeats, label }: { runs: number; repe
       endpoint,
       floor,
       ingestRatio: ratio(endpoint.median, floor.median),
-      serverPeakRssMb,
+      serverPeakRssMb: readServerPeakRssMb(),
       lastBuildId,
+      bare,
+      smallVsBare: ratio(endpoint.median, bare.median),
     };
   } finally {
     await client.end();
