@@ -88,10 +88,11 @@ function printIngest(ingest: IngestSize[]): void {
 }
 
 function printTrend(trend: TrendSize[]): void {
-  console.log("\nTrend  history  points  http med ms  bare med ms  ratio  http ms/point  seed s  statements");
+  console.log("\nTrend  history  points  http med ms  bare med ms  ratio  http ms/point  seed s  statements  empty query ms");
   for (const t of trend) {
-    console.log(`       ${pad(String(t.history), 8)} ${pad(String(t.last), 7)} ${pad(ms(t.http.median), 12)} ${pad(ms(t.bare.median), 12)} ${pad(t.trendRatio.toFixed(2), 6)} ${pad(t.httpPerPointMs.toFixed(4), 14)} ${pad(t.seedSeconds.toFixed(1), 7)} ${t.statements}`);
+    console.log(`       ${pad(String(t.history), 8)} ${pad(String(t.last), 7)} ${pad(ms(t.http.median), 12)} ${pad(ms(t.bare.median), 12)} ${pad(t.trendRatio.toFixed(2), 6)} ${pad(t.httpPerPointMs.toFixed(4), 14)} ${pad(t.seedSeconds.toFixed(1), 7)} ${pad(String(t.statements), 11)} ${ms(t.emptyQuery.median)}`);
   }
+  console.log("       (empty query: the same signed-in POST asking { _version }, no data: the round trip's fixed part)");
   for (const t of trend) console.log(`       plan at ${t.history}: ${t.plan.join(" > ")}`);
 }
 

@@ -1,6 +1,6 @@
 import { Client } from "pg";
 import { graphQLBody, postGraphQLBody, requireEnv } from "./http";
-import { captureRequestStatements, replayStatements } from "./statement-count";
+import { BENCH_APPLICATION_NAME, captureRequestStatements, replayStatements } from "./statement-count";
 import { ratio, timeRepeated, type Timing } from "./stats";
 
 // Section 2: trend(case, quantity, model, branch, last) as history grows. Each
@@ -30,6 +30,12 @@ export interface TrendSize {
   plan: string[];
   /** SQL statements one trend request sends (the bare side replays them all). */
   statements: number;
+  /**
+   * The same signed-in round trip asking `{ _version }` (session check, no
+   * data): what any answer costs before its first row, shown beside the ratio
+   * because it alone can exceed twice the trend's SQL.
+   */
+  emptyQuery: Timing;
 }
 
 /** Bulk path: builds, runs and quantity_values of one series from generate_series in one statement. */
@@ -56,7 +62,7 @@ async function seedHistory(client: Client, branch: string, n: number): Promise<v
 }
 
 export async function benchTrend({ sizes, last, repeats, cookie }: { sizes: number[]; last: number; repeats: number; cookie: string }): Promise<TrendSize[]> {
-  const client = new Client({ connectionString: requireEnv("DATABASE_URL") });
+  const client = new Client({ connectionString: requireEnv("DATABASE_URL"), application_name: BENCH_APPLICATION_NAME });
   await client.connect();
   const out: TrendSize[] = [];
   try {
@@ -79,6 +85,8 @@ export async function benchTrend({ sizes, last, repeats, cookie }: { sizes: numb
       const trendStatement = statements.find((s) => /from quantity_values/i.test(s.text));
       if (!trendStatement) throw new Error(`trend request sent no quantity_values statement (${statements.length} statements logged)`);
       const http = await timeRepeated(ask, repeats, 3);
+      const emptyBody = graphQLBody("query Empty { _version }", {});
+      const emptyQuery = await timeRepeated(() => postGraphQLBody(emptyBody, { cookie }), repeats, 3);
       const bare = await timeRepeated(() => replayStatements(client, statements), repeats, 3);
       const returned = Math.max(points, 1);
       const explained = await client.query<{ "QUERY PLAN": [{ Plan: PlanNode }] }>(`explain (format json) ${trendStatement.text}`, trendStatement.params);
@@ -89,6 +97,7 @@ export async function benchTrend({ sizes, last, repeats, cookie }: { sizes: numb
         barePerPointMs: bare.median / returned,
         plan: listNodes(explained.rows[0]["QUERY PLAN"][0].Plan),
         statements: statements.length,
+        emptyQuery,
       });
     }
   } finally {
