@@ -14,16 +14,34 @@ export interface TrendScope {
   grid: string;
 }
 
-/** Ids of the newest `last` builds of the branch holding a value of the scope, oldest first. */
+/**
+ * Ids of the newest `last` builds of the branch holding a value of the scope,
+ * oldest first. The index orders one model's values; several models at once
+ * (model_key in (...)) would make PostgreSQL read and sort the whole history.
+ * So each model reads its own newest `last` entries (LATERAL ... LIMIT over the
+ * index) and only those, at most models × last rows, are merged.
+ */
 export async function getTrendBuildIds({ db, scope, last }: { db: Db; scope: TrendScope; last: number }): Promise<number[]> {
-  const rows: { build_id: number }[] = await db("quantity_values")
-    .where({ case_key: scope.caseKey, quantity_key: scope.quantityKey, branch: scope.branch, grid: scope.grid })
-    .whereIn("model_key", scope.modelKeys)
-    .groupBy("build_id", "build_received_at")
-    .orderBy([{ column: "build_received_at", order: "desc" }, { column: "build_id", order: "desc" }])
-    .limit(last)
-    .select("build_id");
-  return rows.map((r) => r.build_id).reverse();
+  const result: { rows: { build_id: number }[] } = await db.raw(
+    `select x.build_id
+       from unnest(?::text[]) as m(model_key)
+      cross join lateral (
+            select build_id, build_received_at
+              from quantity_values
+             where case_key = ? and quantity_key = ? and model_key = m.model_key and branch = ? and grid = ?
+             order by build_received_at desc, build_id desc
+             limit ?) as x
+      group by x.build_id, x.build_received_at
+      order by x.build_received_at desc, x.build_id desc
+      limit ?`,
+    [`{${scope.modelKeys.map(quoteArrayItem).join(",")}}`, scope.caseKey, scope.quantityKey, scope.branch, scope.grid, last, last],
+  );
+  return result.rows.map((r) => r.build_id).reverse();
+}
+
+/** One element of a PostgreSQL array literal, quoted so that commas, quotes and braces in a key stay inside it. */
+function quoteArrayItem(value: string): string {
+  return `"${value.replaceAll("\\", "\\\\").replaceAll('"', '\\"')}"`;
 }
 
 export interface TrendChartPointRow {
