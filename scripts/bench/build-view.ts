@@ -1,7 +1,7 @@
 import { Client } from "pg";
 import { graphQLBody, postGraphQLBody, requireEnv } from "./http";
 import { generateBenchRuns, withFreshBuild } from "./payload";
-import { StatementLog, captureRequestStatements, replayStatements } from "./statement-count";
+import { BENCH_APPLICATION_NAME, StatementLog, captureRequestStatements, replayStatements } from "./statement-count";
 import { ratio, timeRepeated, type Timing } from "./stats";
 
 // Section 3: the build page's query, build(id), for a build of many runs.
@@ -44,7 +44,7 @@ export async function benchBuildView({ buildId, smallBuildId, repeats, cookie }:
   // The bare side: the statements this very request sends (session check
   // included), taken from PostgreSQL's log with their values and replayed with pg.
   const statements = await captureRequestStatements(() => postGraphQLBody(body, { cookie }));
-  const client = new Client({ connectionString: requireEnv("DATABASE_URL") });
+  const client = new Client({ connectionString: requireEnv("DATABASE_URL"), application_name: BENCH_APPLICATION_NAME });
   await client.connect();
   let bare: Timing;
   try {

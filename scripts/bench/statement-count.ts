@@ -16,6 +16,9 @@ import { requireEnv } from "./http";
 const ENTRY_START = /^\d{4}-\d\d-\d\d \d\d:\d\d:\d\d[.\d]* \S+ \[(\d+)\] (\w+):\s+(.*)$/;
 const STATEMENT = /^(?:statement|execute [^:]*): ([\s\S]*)$/;
 
+/** The bench's own connections name themselves so that ending the app's idle ones spares them. */
+export const BENCH_APPLICATION_NAME = "tauline-bench";
+
 /** One statement as the server logged it, ready to send again with pg. */
 export interface LoggedStatement {
   text: string;
@@ -54,7 +57,8 @@ export class StatementLog {
       await this.admin.query(`alter database "${db}" reset log_parameter_max_length`);
     }
     await this.admin.query(
-      "select pg_terminate_backend(pid) from pg_stat_activity where datname = current_database() and pid <> pg_backend_pid() and state = 'idle'",
+      "select pg_terminate_backend(pid) from pg_stat_activity where datname = current_database() and pid <> pg_backend_pid() and state = 'idle' and application_name <> $1",
+      [BENCH_APPLICATION_NAME],
     );
   }
 
