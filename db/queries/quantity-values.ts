@@ -1,7 +1,6 @@
 import "server-only";
 import type { Db } from "../index";
 import type { Verdict } from "@/lib/analysis";
-import type { JudgedQuantity } from "@/lib/evaluation/types";
 
 export interface QuantityValueRow {
   id: number;
@@ -25,52 +24,6 @@ export interface QuantityValueRow {
   drift_p_value: number | null;
   drift_slope: number | null;
   details: Record<string, unknown>;
-}
-
-/**
- * Stores the judged quantities of every run of a submission in one statement:
- * the rows travel as ONE JSON document that PostgreSQL unpacks
- * (json_to_recordset). V8's native JSON.stringify writes thousands of rows far
- * faster than pg's per-element array serialiser (a regular-expression escape per
- * string), there is no bind-parameter limit, and the run's case, model and grid
- * are taken from the runs just inserted instead of being sent once per value.
- */
-export async function insertQuantityValues({
-  db,
-  build,
-  runs,
-}: {
-  db: Db;
-  build: { id: number; branch: string; receivedAt: Date };
-  runs: readonly { runId: number; quantities: readonly JudgedQuantity[] }[];
-}) {
-  const rows = runs.flatMap(({ runId, quantities }) =>
-    quantities.map((q) => ({
-      r: runId,
-      k: q.key,
-      v: q.value,
-      o: q.origin,
-      b: q.band?.id ?? null,
-      vd: q.verdict,
-      bb: q.baselineBuildId,
-      bv: q.baselineValue,
-      bd: q.baselineDelta,
-      d: q.drift,
-      dr: q.driftReason,
-      dp: q.driftPValue,
-      ds: q.driftSlope,
-      dt: q.details,
-    })),
-  );
-  if (rows.length === 0) return;
-  await db.raw(
-    `insert into quantity_values (build_id, branch, build_received_at, run_id, case_key, model_key, grid, quantity_key, value, origin,
-       band_id, verdict, baseline_build_id, baseline_value, baseline_delta, drift, drift_reason, drift_p_value, drift_slope, details)
-     select ?::bigint, ?::text, ?::timestamptz, x.r, run.case_key, run.model_key, run.grid, x.k, x.v, x.o, x.b, x.vd, x.bb, x.bv, x.bd, x.d, x.dr, x.dp, x.ds, coalesce(x.dt, '{}')
-       from json_to_recordset(?::json) as x(r bigint, k text, v float8, o text, b bigint, vd text, bb bigint, bv float8, bd float8, d boolean, dr text, dp float8, ds float8, dt jsonb)
-       join runs run on run.id = x.r`,
-    [build.id, build.branch, build.receivedAt, JSON.stringify(rows)],
-  );
 }
 
 export async function getQuantityValuesByRunIds({ db, runIds }: { db: Db; runIds: readonly number[] }): Promise<QuantityValueRow[]> {

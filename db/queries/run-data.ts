@@ -5,12 +5,13 @@ import type { RunSubmission } from "@/lib/validation/submission";
 import { copySeriesRows } from "./series-copy";
 
 // The raw data of a submission's runs (series, stress samples with their
-// invariants, grid studies, closure coefficients), written for all runs at once:
-// a handful of statements per submission whatever its run count.
+// invariants, grid studies), written for all runs at once: a handful of
+// statements per submission whatever its run count. (Coefficients go with the
+// runs themselves, db/queries/run-insert.ts.)
 
 export interface RunDataRow {
   runId: number;
-  run: Pick<RunSubmission, "series" | "stresses" | "gridStudy" | "coefficients">;
+  run: Pick<RunSubmission, "series" | "stresses" | "gridStudy">;
   stresses: StressAnalysis[];
   gridStudy: GridStudyAnalysis | null;
 }
@@ -22,11 +23,6 @@ export async function insertRunData({ trx, rows }: { trx: Knex.Transaction; rows
   await copySeriesRows({ trx, rows: rows.flatMap(({ runId, run }) => (run.series ?? []).map((s) => ({ runId, key: s.key, x: s.x, y: s.y }))) });
   await insertChunked(trx, "stress_samples", rows.flatMap(stressRows));
   await insertChunked(trx, "grid_studies", rows.flatMap(gridStudyRows));
-  await insertChunked(
-    trx,
-    "run_coefficients",
-    rows.flatMap(({ runId, run }) => (run.coefficients ?? []).map((c) => ({ run_id: runId, name: c.name, value: c.value }))),
-  );
 }
 
 async function insertChunked(trx: Knex.Transaction, table: string, rows: Record<string, unknown>[]) {

@@ -2,7 +2,6 @@ import "server-only";
 import type { Db } from "../index";
 import type { Verdict } from "@/lib/analysis";
 import type { RunSubmission } from "@/lib/validation/submission";
-import { arrayBinding } from "./array-binding";
 
 export interface RunRow {
   id: number;
@@ -40,31 +39,6 @@ export async function deleteRunsByKeys({ db, buildId, runs }: { db: Db; buildId:
     [runs.map((r) => r.case), runs.map((r) => r.model), runs.map((r) => r.grid), buildId],
   );
 }
-
-/** Inserts every run of a submission in one statement; returns their ids in the order given. */
-export async function insertRuns({ db, buildId, runs }: { db: Db; buildId: number; runs: readonly NewRun[] }): Promise<number[]> {
-  if (runs.length === 0) return [];
-  const result: { rows: { id: number; case_key: string; model_key: string; grid: string }[] } = await db.raw(
-    `insert into runs (build_id, case_key, model_key, grid, status, iterations, wall_seconds, verdict)
-     select ?::bigint, * from unnest(?::text[], ?::text[], ?::text[], ?::text[], ?::int[], ?::float8[], ?::text[])
-     returning id, case_key, model_key, grid`,
-    [
-      buildId,
-      runs.map((r) => r.case),
-      runs.map((r) => r.model),
-      runs.map((r) => r.grid),
-      runs.map((r) => r.status),
-      arrayBinding(runs.map((r) => r.iterations)),
-      arrayBinding(runs.map((r) => r.wallSeconds)),
-      runs.map((r) => r.verdict),
-    ],
-  );
-  // RETURNING order is not promised by SQL: match rows to runs by their unique key.
-  const ids = new Map(result.rows.map((r) => [runKey(r.case_key, r.model_key, r.grid), Number(r.id)]));
-  return runs.map((r) => ids.get(runKey(r.case, r.model, r.grid))!);
-}
-
-const runKey = (caseKey: string, model: string, grid: string) => `${caseKey}|${model}|${grid}`;
 
 /**
  * The runs stored now under these keys of a build, in the order given (a key

@@ -1,8 +1,9 @@
 import "server-only";
 import type { Knex } from "knex";
-import { insertQuantityValues, seriesKey } from "@/db/queries/quantity-values";
+import { seriesKey } from "@/db/queries/quantity-values";
 import { insertRunData } from "@/db/queries/run-data";
-import { deleteRunsByKeys, insertRuns } from "@/db/queries/runs";
+import { insertRunsWithValues } from "@/db/queries/run-insert";
+import { deleteRunsByKeys } from "@/db/queries/runs";
 import type { RunDerivation } from "@/lib/evaluation/derive";
 import { judgeRun } from "@/lib/evaluation/judge";
 import type { BandInForce, JudgedQuantity } from "@/lib/evaluation/types";
@@ -21,37 +22,37 @@ export interface StoreRunsContext {
 
 /**
  * Judges every run of a submission (pure, in memory) and then stores them all
- * with a fixed number of statements: one DELETE of earlier posts of the same
- * keys, one INSERT of the runs, one binary COPY of the series, one INSERT each
- * for the other raw data and one for the judged quantities. A 200-run build
- * costs the same handful of round trips as a 5-run one.
+ * with a fixed number of statements: a DELETE of earlier posts of the same keys
+ * (re-posts only), ONE statement for the runs with their coefficients and judged
+ * quantities, one binary COPY of the series, and an INSERT each for stress
+ * samples and grid studies when there are any. A 200-run build costs the same
+ * handful of round trips as a 5-run one.
  */
 export async function storeRuns(trx: Knex.Transaction, ctx: StoreRunsContext): Promise<{ runIds: number[]; alarming: boolean }> {
   const { build, runs, derived } = ctx;
   const judged = runs.map((run, i) => judgeOne(run, derived[i], ctx));
 
   if (!ctx.created) await deleteRunsByKeys({ db: trx, buildId: build.id, runs });
-  const runIds = await insertRuns({
+  const runIds = await insertRunsWithValues({
     db: trx,
-    buildId: build.id,
+    build: { id: build.id, branch: build.branch, receivedAt: build.received_at },
     runs: runs.map((run, i) => ({
-      case: run.case,
-      model: run.model,
-      grid: run.grid,
-      status: run.status,
-      iterations: run.iterations ?? null,
-      wallSeconds: run.wallSeconds ?? null,
-      verdict: judged[i].verdict,
+      run: {
+        case: run.case,
+        model: run.model,
+        grid: run.grid,
+        status: run.status,
+        iterations: run.iterations ?? null,
+        wallSeconds: run.wallSeconds ?? null,
+        verdict: judged[i].verdict,
+      },
+      coefficients: run.coefficients ?? [],
+      quantities: judged[i].quantities,
     })),
   });
   await insertRunData({
     trx,
     rows: runs.map((run, i) => ({ runId: runIds[i], run, stresses: derived[i].stresses, gridStudy: derived[i].gridStudy })),
-  });
-  await insertQuantityValues({
-    db: trx,
-    build: { id: build.id, branch: build.branch, receivedAt: build.received_at },
-    runs: runs.map((_, i) => ({ runId: runIds[i], quantities: judged[i].quantities })),
   });
   return { runIds, alarming: runs.some((run, i) => isAlarming(run, judged[i].quantities)) };
 }
