@@ -11,12 +11,9 @@ import type { RunSubmission } from "@/lib/validation/submission";
 // the same lib/analysis derivations (deriveRunQuantities), and write the same
 // rows (build, runs, run_series as float8[], run_coefficients, quantity_values)
 // in one transaction with the fastest path the schema allows: series by binary
-// COPY (the same encoder the endpoint uses), quantity values as one JSON
-// document (as the endpoint), the few runs and coefficients by multi-row inserts.
+// COPY (the same encoder the endpoint uses); runs, coefficients and quantity
+// values in one statement of JSON documents (as the endpoint).
 // No GraphQL, no zod, no judging against bands (every value is stored 'unbanded').
-
-// PostgreSQL allows at most 65,535 bind parameters per statement.
-const MAX_PARAMS = 60_000;
 
 interface PostedBody {
   variables: { input: { build: { solver: string; version: string; commit: string; branch: string }; runs: RunSubmission[] } };
@@ -34,45 +31,35 @@ export async function writeFloorSubmission(client: Client, body: string, caseSet
     );
     const buildId = b.rows[0].id;
     const receivedAt = b.rows[0].received_at;
-    const runRows = runs.map((r) => [buildId, r.case, r.model, r.grid ?? "default", r.status, r.iterations ?? null, r.wallSeconds ?? null, "unbanded"]);
-    const runIds = (await insertRows<{ id: string }>(client, "runs (build_id, case_key, model_key, grid, status, iterations, wall_seconds, verdict)", runRows, "returning id")).map((r) => r.id);
-
-    const seriesRows = runs.flatMap((r, i) => (r.series ?? []).map((s) => ({ runId: Number(runIds[i]), key: s.key, x: s.x, y: s.y })));
-    await pipeline(Readable.from(encodeSeriesCopy(seriesRows)), client.query(copyFrom("COPY run_series (run_id, key, x, y) FROM STDIN (FORMAT binary)")));
-    const coefficientRows = runs.flatMap((r, i) => (r.coefficients ?? []).map((c) => [runIds[i], c.name, c.value]));
-    await insertRows(client, "run_coefficients (run_id, name, value)", coefficientRows);
-    // The endpoint's own way for thousands of rows: one JSON document unpacked by json_to_recordset.
-    const values = runs.flatMap((r, i) => derived[i].quantities.map((q) => ({ r: runIds[i], k: q.key, v: q.value, o: q.origin, dt: q.details })));
-    await client.query(
-      `insert into quantity_values (build_id, branch, build_received_at, run_id, case_key, model_key, grid, quantity_key, value, origin, verdict, details)
-       select $1::bigint, $2::text, $3::timestamptz, x.r, run.case_key, run.model_key, run.grid, x.k, x.v, x.o, 'unbanded', coalesce(x.dt, '{}')
-         from json_to_recordset($4::json) as x(r bigint, k text, v float8, o text, dt jsonb)
-         join runs run on run.id = x.r`,
-      [buildId, build.branch, receivedAt, JSON.stringify(values)],
+    // Runs, coefficients and quantity values in one statement, rows as JSON documents (the endpoint's way).
+    const key = (r: RunSubmission) => ({ c: r.case, m: r.model, g: r.grid ?? "default" });
+    const runRows = runs.map((r) => ({ ...key(r), s: r.status, i: r.iterations ?? null, w: r.wallSeconds ?? null }));
+    const coefficientRows = runs.flatMap((r) => (r.coefficients ?? []).map((c) => ({ ...key(r), n: c.name, v: c.value })));
+    const valueRows = runs.flatMap((r, i) => derived[i].quantities.map((q) => ({ ...key(r), k: q.key, v: q.value, o: q.origin, dt: q.details })));
+    const inserted = await client.query<{ id: string; case_key: string; model_key: string; grid: string }>(
+      `with r as (
+         insert into runs (build_id, case_key, model_key, grid, status, iterations, wall_seconds, verdict)
+         select $1::bigint, x.c, x.m, x.g, x.s, x.i, x.w, 'unbanded' from json_to_recordset($4::json) as x(c text, m text, g text, s text, i int, w float8)
+         returning id, case_key, model_key, grid
+       ), coefficients as (
+         insert into run_coefficients (run_id, name, value)
+         select r.id, x.n, x.v from json_to_recordset($5::json) as x(c text, m text, g text, n text, v float8)
+           join r on r.case_key = x.c and r.model_key = x.m and r.grid = x.g
+       ), "values" as (
+         insert into quantity_values (build_id, branch, build_received_at, run_id, case_key, model_key, grid, quantity_key, value, origin, verdict, details)
+         select $1::bigint, $2::text, $3::timestamptz, r.id, r.case_key, r.model_key, r.grid, x.k, x.v, x.o, 'unbanded', coalesce(x.dt, '{}')
+           from json_to_recordset($6::json) as x(c text, m text, g text, k text, v float8, o text, dt jsonb)
+           join r on r.case_key = x.c and r.model_key = x.m and r.grid = x.g
+       )
+       select id, case_key, model_key, grid from r`,
+      [buildId, build.branch, receivedAt, JSON.stringify(runRows), JSON.stringify(coefficientRows), JSON.stringify(valueRows)],
     );
+    const idOf = new Map(inserted.rows.map((r) => [`${r.case_key}|${r.model_key}|${r.grid}`, Number(r.id)]));
+    const seriesRows = runs.flatMap((r) => (r.series ?? []).map((s) => ({ runId: idOf.get(`${r.case}|${r.model}|${r.grid ?? "default"}`)!, key: s.key, x: s.x, y: s.y })));
+    await pipeline(Readable.from(encodeSeriesCopy(seriesRows)), client.query(copyFrom("COPY run_series (run_id, key, x, y) FROM STDIN (FORMAT binary)")));
     await client.query("commit");
   } catch (error) {
     await client.query("rollback");
     throw error;
   }
-}
-
-/** Multi-row INSERT, split only where the bind-parameter limit forces it. */
-async function insertRows<T extends object = Record<string, unknown>>(
-  client: Client,
-  target: string,
-  rows: unknown[][],
-  suffix = "",
-): Promise<T[]> {
-  if (rows.length === 0) return [];
-  const width = rows[0].length;
-  const perStatement = Math.floor(MAX_PARAMS / width);
-  const out: T[] = [];
-  for (let start = 0; start < rows.length; start += perStatement) {
-    const chunk = rows.slice(start, start + perStatement);
-    const values = chunk.map((_, r) => `(${Array.from({ length: width }, (_, c) => `$${r * width + c + 1}`).join(", ")})`).join(", ");
-    const res = await client.query<T & object>(`insert into ${target} values ${values} ${suffix}`, chunk.flat());
-    out.push(...(res.rows as T[]));
-  }
-  return out;
 }
