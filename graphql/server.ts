@@ -17,6 +17,11 @@ export { CSRF_HEADER } from "./guards/request-gate";
 
 const production = process.env.NODE_ENV === "production";
 
+function forwardToLog(level: "debug" | "info" | "warn" | "error", [first, ...rest]: unknown[]): void {
+  const fields = first instanceof Error ? { err: first } : rest.length > 0 ? { details: rest } : {};
+  getLogger()[level](fields, first instanceof Error ? first.message : String(first));
+}
+
 /** What the route hands yoga besides the request: the note for its closing log line. */
 export interface ServerContext {
   request: Request;
@@ -37,6 +42,14 @@ export const yoga = createYoga<ServerContext, GraphQLContext>({
   fetchAPI: { Response },
   graphiql: !production,
   landingPage: false,
+  // yoga's own messages (parse failures, plugin warnings) as pino lines with the
+  // request id, not as plain console text beside the JSON log.
+  logging: {
+    debug: (...args: unknown[]) => forwardToLog("debug", args),
+    info: (...args: unknown[]) => forwardToLog("info", args),
+    warn: (...args: unknown[]) => forwardToLog("warn", args),
+    error: (...args: unknown[]) => forwardToLog("error", args),
+  },
   // One operation per request: no client of ours batches, and a batch of
   // thousands of cheap queries would slip past every per-document limit.
   batching: false,

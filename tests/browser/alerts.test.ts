@@ -37,7 +37,7 @@ describe("My alerts page", () => {
 
     await form.getByLabel("Branch (empty: every branch)").fill("main branch");
     await form.getByRole("button", { name: "Subscribe" }).click();
-    await expect.poll(() => form.getByRole("alert").innerText()).toMatch(/^Branch must be a branch name/);
+    await expect.poll(() => form.getByRole("alert").innerText()).toMatch(/^Branch is not a git branch name/);
 
     await row.getByRole("button", { name: "Remove" }).click();
     await expect.poll(() => row.count(), { timeout: 15_000 }).toBe(0);
