@@ -27,13 +27,23 @@ export interface CiTokenRow {
   revoked_at: Date | null;
 }
 
-/** A usable token by its hash: not revoked, not expired. Records its use. */
+/**
+ * A usable token by its hash: not revoked, not expired. Records its use, at most
+ * once a minute: every CI request would otherwise write (and row-lock) the same
+ * token row, which serialises concurrent submissions behind one another.
+ */
 export async function useCiTokenByHash({ db, tokenHash }: { db: Db; tokenHash: string }): Promise<CiTokenRow | undefined> {
-  const rows: CiTokenRow[] = await db("ci_tokens")
-    .where({ token_hash: tokenHash })
-    .whereNull("revoked_at")
-    .andWhere((w) => w.whereNull("expires_at").orWhere("expires_at", ">", db.fn.now()))
-    .update({ last_used_at: db.fn.now() })
-    .returning(["id", "name", "expires_at", "revoked_at"]);
-  return rows[0];
+  const result = await db.raw<{ rows: CiTokenRow[] }>(
+    `with usable as (
+       select id, name, expires_at, revoked_at, last_used_at from ci_tokens
+        where token_hash = ? and revoked_at is null and (expires_at is null or expires_at > now())
+     ), touched as (
+       update ci_tokens set last_used_at = now() from usable
+        where ci_tokens.id = usable.id and (usable.last_used_at is null or usable.last_used_at < now() - interval '1 minute')
+       returning ci_tokens.id
+     )
+     select id, name, expires_at, revoked_at from usable`,
+    [tokenHash],
+  );
+  return result.rows[0];
 }
