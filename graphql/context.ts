@@ -2,7 +2,7 @@ import { createHash } from "node:crypto";
 import { GraphQLError } from "graphql";
 import { getDb } from "@/db";
 import { useCiTokenByHash } from "@/db/queries/identities";
-import { getSessionActor } from "@/lib/auth/session";
+import { getRequestActor } from "@/lib/auth/session";
 import type { RequestNote } from "@/lib/http/request-log";
 import type { Actor } from "@/lib/services/actor";
 import { createLoaders, type Loaders } from "./loaders";
@@ -30,7 +30,7 @@ export async function createContext({ request, note }: { request: Request; note?
     if (!token) throw unauthenticated("The CI token is unknown, revoked or expired.");
     actor = { kind: "ci", tokenId: token.id, label: `ci:${token.name}` };
   } else {
-    actor = await getSessionActor();
+    actor = await getRequestActor();
   }
   if (note) note.actor = actor ? actor.kind : "anonymous";
   return { actor, loaders: createLoaders(db) };
