@@ -20,8 +20,15 @@ export const DOCUMENT_LIMITS = {
   maxAliases: 10,
   /** Directives (@include/@skip; no real operation uses one). */
   maxDirectives: 10,
-  /** graphql-armor's cost (objects 2, scalars 1, ×1.5 per level; the largest real operation, the mailbox, costs 456). */
-  maxCost: 5000,
+  /**
+   * graphql-armor's cost (objects 2, scalars 1, ×1.5 per level). armor also
+   * multiplies a field's cost by a literal `first:`/`last:` argument (a variable
+   * it cannot see), so the limit must admit the largest page the server itself
+   * accepts written inline: a full trend at `last: 5000` costs 171,250, the
+   * largest real operation with variables (the mailbox) 456, while a four-level
+   * fragment breadth bomb costs over 500,000.
+   */
+  maxCost: 250_000,
 } as const;
 
 /**

@@ -56,6 +56,14 @@ describe("GraphQL document limits", () => {
     }
   });
 
+  it("lets a full trend through with its largest page written inline (armor multiplies cost by a literal last:)", async () => {
+    // 5000 is the most points trend(…) serves (lib/services/reads.ts); the same document with $last passes trivially.
+    const source = `query Full { trend(case: "channel-re590", quantity: "kappa", model: "sst", branch: "main", last: 5000) {
+      points { buildId commit version receivedAt value verdict drift driftReason bandVersion reference lower upper marginalMargin } } }`;
+    const outcome = await validateOnServer(source);
+    expect(outcome).toEqual({ status: 400, errors: ['Fragment "H3UnusedProbe" is never used.'] });
+  });
+
   it("the probe itself reports a limit when one is passed (so the check above can fail)", async () => {
     const outcome = await validateOnServer(`{ ${repeat(DOCUMENT_LIMITS.maxAliases + 1, (i) => `a${i}: branches`)} }`);
     expect(outcome.errors.join(" ")).toMatch(/Aliases limit/i);
