@@ -30,23 +30,13 @@ smtp_pid_file="$RUN_DIR/bench-smtp.pid"
 db_created=0
 PG_STARTED_HERE=0
 
+# shellcheck source=scripts/lib/run-cleanup.sh
+source "$TAULINE_ROOT/scripts/lib/run-cleanup.sh"
 clean_up_bench() {
   local status=$?
   trap - EXIT INT TERM
   set +e
-  stop_by_pid_file "$web_pid_file" next "bench web server"
-  stop_by_pid_file "$smtp_pid_file" smtp-fake "bench SMTP fake"
-  if [ -n "${PGDATA_TAULINE:-}" ]; then
-    hold_lock cluster 8
-    if [ "$db_created" = 1 ]; then
-      say "dropping $bench_db"
-      drop_database "$bench_db" >/dev/null
-    fi
-    if [ "$PG_STARTED_HERE" = 1 ] && ! read_live_pid "$RUN_DIR/web.pid" next >/dev/null; then
-      stop_pg
-    fi
-    release_lock 8
-  fi
+  stop_run_services bench "$web_pid_file" "$smtp_pid_file" "$bench_db" "$db_created"
   rm -rf "$bench_mail_dir"
   exit "$status"
 }

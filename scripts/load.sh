@@ -34,29 +34,13 @@ smtp_pid_file="$RUN_DIR/load-smtp.pid"
 db_created=0
 PG_STARTED_HERE=0
 
-# True while a database of another test, bench or load run lives in the cluster
-# (that run joined the cluster we started; stopping it would pull it from under them).
-other_run_uses_cluster() {
-  [ -n "$(pg_admin_sql "SELECT 1 FROM pg_database WHERE datname ~ '^tauline_(test|bench|load)_' AND datname <> '$load_db' LIMIT 1")" ]
-}
-
+# shellcheck source=scripts/lib/run-cleanup.sh
+source "$TAULINE_ROOT/scripts/lib/run-cleanup.sh"
 clean_up_load() {
   local status=$?
   trap - EXIT INT TERM
   set +e
-  stop_by_pid_file "$web_pid_file" next "load web server"
-  stop_by_pid_file "$smtp_pid_file" smtp-fake "load SMTP fake"
-  if [ -n "${PGDATA_TAULINE:-}" ]; then
-    hold_lock cluster 8
-    if [ "$db_created" = 1 ]; then
-      say "dropping $load_db"
-      drop_database "$load_db" >/dev/null
-    fi
-    if [ "$PG_STARTED_HERE" = 1 ] && ! read_live_pid "$RUN_DIR/web.pid" next >/dev/null && ! other_run_uses_cluster; then
-      stop_pg
-    fi
-    release_lock 8
-  fi
+  stop_run_services load "$web_pid_file" "$smtp_pid_file" "$load_db" "$db_created"
   rm -rf "$load_mail_dir"
   exit "$status"
 }

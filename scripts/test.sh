@@ -23,8 +23,8 @@ smtp_pid_file="$RUN_DIR/test-smtp.pid"
 db_created=0
 vitest_status=1
 
-# shellcheck source=scripts/lib/test-cleanup.sh
-source "$TAULINE_ROOT/scripts/lib/test-cleanup.sh"
+# shellcheck source=scripts/lib/run-cleanup.sh
+source "$TAULINE_ROOT/scripts/lib/run-cleanup.sh"
 trap clean_up_test_run EXIT
 trap 'exit 130' INT
 trap 'exit 143' TERM

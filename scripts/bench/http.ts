@@ -44,7 +44,11 @@ export function signIn(email: string): Promise<string> {
  * largest VmHWM among it and its descendants is taken.
  */
 export function readServerPeakRssMb(): number {
-  const root = Number(requireEnv("BENCH_WEB_PID"));
+  return readPeakRssOfTreeMb(Number(requireEnv("BENCH_WEB_PID")));
+}
+
+/** The largest VmHWM (MB) among a process and its descendants; 0 when none can be read. */
+export function readPeakRssOfTreeMb(root: number): number {
   let peak = 0;
   for (const pid of [root, ...descendantsOf(root)]) {
     try {

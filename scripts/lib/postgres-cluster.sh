@@ -55,7 +55,7 @@ running_pg_port() {
 }
 
 # Starts the cluster unless it runs. Sets PG_STARTED_HERE=1 when it started it.
-# shellcheck disable=SC2034  # PG_STARTED_HERE is read by test-cleanup.sh
+# shellcheck disable=SC2034  # PG_STARTED_HERE is read by run-cleanup.sh
 ensure_pg_running() {
   PG_STARTED_HERE=0
   match_pg_bin_to_cluster
