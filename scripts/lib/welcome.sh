@@ -14,7 +14,8 @@ print_curl_example() {
   -H 'Authorization: Bearer $TAULINE_CI_TOKEN' -H 'Content-Type: application/json' \\
   -d '{\"query\":\"{ __typename }\"}'"
   fi
-  printf '%s\n' "$example" | sed 's/^/  /'
+  # The README shows the default port; print the URL this server really has.
+  printf '%s\n' "$example" | sed "s#http://127.0.0.1:3000#$APP_URL#; s/^/  /"
 }
 
 print_welcome() {
