@@ -55,15 +55,7 @@ release_lock 8
 export_app_env "$TAULINE_BENCH_PORT" "$TAULINE_BENCH_SMTP_PORT" "$bench_db" "$bench_mail_dir"
 export NEXT_DIST_DIR=.data/next-test
 
-say "migrating and seeding $bench_db"
-npm run --silent db:migrate
-npm run --silent db:seed
-
-: >"$RUN_DIR/bench-smtp.log"
-start_smtp_fake "$smtp_pid_file" "$RUN_DIR/bench-smtp.log"
-build_web
-: >"$RUN_DIR/bench-web.log"
-start_web "$web_pid_file" "$RUN_DIR/bench-web.log"
+migrate_seed_and_serve bench "$smtp_pid_file" "$web_pid_file"
 
 # What the bench program needs beyond the app's environment: the server's pid
 # (for its peak RSS) and a superuser connection over the cluster's socket

@@ -68,15 +68,7 @@ export_app_env "$TAULINE_LOAD_PORT" "$TAULINE_LOAD_SMTP_PORT" "$load_db" "$load_
 # A build folder of its own, inside .data (git-ignored).
 export NEXT_DIST_DIR="${TAULINE_LOAD_DIST_DIR:-.data/next-load}"
 
-say "migrating and seeding $load_db"
-npm run --silent db:migrate
-npm run --silent db:seed
-
-: >"$RUN_DIR/load-smtp.log"
-start_smtp_fake "$smtp_pid_file" "$RUN_DIR/load-smtp.log"
-build_web
-: >"$RUN_DIR/load-web.log"
-start_web "$web_pid_file" "$RUN_DIR/load-web.log"
+migrate_seed_and_serve load "$smtp_pid_file" "$web_pid_file"
 
 # For the server's peak memory in the report.
 export LOAD_WEB_PID

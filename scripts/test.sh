@@ -42,18 +42,10 @@ export_app_env "$TAULINE_TEST_PORT" "$TAULINE_TEST_SMTP_PORT" "$test_db" "$test_
 # under a server that `npm start` runs. Inside .data, which git ignores.
 export NEXT_DIST_DIR="${NEXT_DIST_DIR:-.data/next-test}"
 
-say "migrating and seeding $test_db"
-npm run --silent db:migrate
-npm run --silent db:seed
-
-: >"$RUN_DIR/test-smtp.log"
-start_smtp_fake "$smtp_pid_file" "$RUN_DIR/test-smtp.log"
 # The mail tests stop and restart the fake (tests/helpers/smtp-fake.ts) and
 # write the new pid here, so the clean-up above still stops it.
 export TAULINE_SMTP_PID_FILE="$smtp_pid_file"
-build_web
-: >"$RUN_DIR/test-web.log"
-start_web "$web_pid_file" "$RUN_DIR/test-web.log"
+migrate_seed_and_serve test "$smtp_pid_file" "$web_pid_file"
 
 export TAULINE_TEST_URL="$APP_URL"
 say "running vitest against $TAULINE_TEST_URL"

@@ -95,3 +95,19 @@ wait_for_health() {
     waited=$((waited + 1))
   done
 }
+
+# The common tail of the throwaway runs (npm test, bench, load), once their
+# database exists and export_app_env has run: migrate and seed it, start the
+# SMTP fake, build if needed and serve. Logs go to $RUN_DIR/LABEL-{smtp,web}.log.
+# migrate_seed_and_serve LABEL SMTP_PID_FILE WEB_PID_FILE
+migrate_seed_and_serve() {
+  local label="$1" smtp_pid_file="$2" web_pid_file="$3"
+  say "migrating and seeding ${DATABASE_URL##*/}"
+  npm run --silent db:migrate
+  npm run --silent db:seed
+  : >"$RUN_DIR/$label-smtp.log"
+  start_smtp_fake "$smtp_pid_file" "$RUN_DIR/$label-smtp.log"
+  build_web
+  : >"$RUN_DIR/$label-web.log"
+  start_web "$web_pid_file" "$RUN_DIR/$label-web.log"
+}
