@@ -49,7 +49,11 @@ async function getCurrentAccount(userId: number, signedInAt: number): Promise<Se
  * re-encrypted token) on every call, a fixed cost each small query paid.
  */
 export async function getRequestActor(): Promise<Actor | null> {
-  const token = await getToken({ req: { cookies: await cookies(), headers: {} } as never, secret: authOptions.secret });
+  // getToken reads only the session cookie and, failing that, an Authorization
+  // header; the headers are left empty on purpose: a bearer header is a CI
+  // token (graphql/context.ts) and must never be taken for a session.
+  const request = { cookies: await cookies(), headers: {} } as unknown as Parameters<typeof getToken>[0]["req"];
+  const token = await getToken({ req: request, secret: authOptions.secret });
   const userId = token?.userId;
   if (typeof userId !== "number") return null;
   const account = await getCurrentAccount(userId, typeof token?.signedInAt === "number" ? token.signedInAt : 0);
