@@ -3,19 +3,11 @@ import type { BuildRow } from "@/db/queries/builds";
 import type { GateDecisionRow } from "@/db/queries/gate";
 import { VerdictBadge } from "@/components/ui/verdict-badge";
 import type { VerdictCounts } from "@/graphql/operations/builds";
+import { BuildOriginFields, HeaderField as Field } from "./build-origin-fields";
 import { formatUtc } from "./format-time";
 import { GateStateTag } from "./gate-state-tag";
 import { ReevaluationNote } from "./reevaluation-note";
 import { RunCounts } from "./run-counts";
-
-function Field({ label, children }: { label: string; children: React.ReactNode }) {
-  return (
-    <div className="min-w-0">
-      <dt className="text-xs text-ink-faint dark:text-white/50">{label}</dt>
-      <dd className="mt-0.5 text-sm">{children}</dd>
-    </div>
-  );
-}
 
 /** What the build is, where it came from, how it fared and what was decided (server-rendered). */
 export function BuildHeader({
@@ -46,22 +38,7 @@ export function BuildHeader({
         </Link>
       </div>
       <dl className="mt-3 grid grid-cols-2 gap-x-6 gap-y-3 sm:grid-cols-3 lg:grid-cols-6">
-        <Field label="Branch">
-          <span className="font-mono text-xs">{build.branch}</span>
-        </Field>
-        <Field label="Commit">
-          <span className="font-mono text-xs break-all select-all">{build.commit}</span>
-        </Field>
-        <Field label="Received">{formatUtc(build.received_at)}</Field>
-        <Field label="CI pipeline">
-          {build.pipeline_url ? (
-            <a href={build.pipeline_url} target="_blank" rel="noreferrer" className="text-tide-700 hover:underline dark:text-tide-300">
-              open pipeline ↗
-            </a>
-          ) : (
-            <span className="text-ink-faint">not given (manual upload)</span>
-          )}
-        </Field>
+        <BuildOriginFields branch={build.branch} commit={build.commit} receivedAt={build.received_at} pipelineUrl={build.pipeline_url} />
         <Field label={`Runs (${total})`}>
           <RunCounts counts={runCounts} />
         </Field>

@@ -1,13 +1,14 @@
+import { formatUtc } from "@/components/builds/format-time";
 import { formatSig, withUnit } from "@/lib/format/numbers";
 import type { GateFindingItem, WaiverItem } from "@/graphql/operations/gate";
 
 // Wording shared by the gate screens. Times are UTC everywhere in Tauline.
 
 const day = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
-const dayTime = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", year: "numeric", hour: "2-digit", minute: "2-digit", timeZone: "UTC" });
 
 export const formatDay = (iso: string) => day.format(new Date(iso));
-export const formatDayTime = (iso: string) => `${dayTime.format(new Date(iso))} UTC`;
+/** Day and time in UTC, as on every screen (components/builds/format-time.ts). */
+export const formatDayTime = (iso: string) => formatUtc(iso);
 
 /** A waiver ends at an instant; "until 14 Dec 2026" names the last day it counts. */
 export function formatUntil(expiresAtIso: string): string {

@@ -1,21 +1,11 @@
 import Link from "next/link";
-import type { ReactNode } from "react";
+import { BuildOriginFields, HeaderField as Field } from "@/components/builds/build-origin-fields";
 import { GateStateTag } from "@/components/builds/gate-state-tag";
 import { RunCounts } from "@/components/builds/run-counts";
 import { VerdictBadge } from "@/components/ui/verdict-badge";
 import type { GateReviewData } from "@/graphql/operations/gate";
-import { formatDayTime } from "./gate-format";
 
 const VERDICTS = ["within", "marginal", "outside", "unbanded", "missing"] as const;
-
-function Field({ label, children }: { label: string; children: ReactNode }) {
-  return (
-    <div className="min-w-0">
-      <dt className="text-xs text-ink-faint dark:text-white/50">{label}</dt>
-      <dd className="mt-0.5 text-sm">{children}</dd>
-    </div>
-  );
-}
 
 /** Which build this is, where it came from, its verdict and its gate state now. */
 export function ReviewHeader({ review }: { review: GateReviewData }) {
@@ -43,23 +33,13 @@ export function ReviewHeader({ review }: { review: GateReviewData }) {
         </nav>
       </div>
       <dl className="mt-3 grid grid-cols-2 gap-x-6 gap-y-3 sm:grid-cols-3 lg:grid-cols-6">
-        <Field label="Branch">
-          <span className="font-mono text-xs">{build.branch}</span>
-          <span className="block text-xs text-ink-faint dark:text-white/50">{review.isCandidate ? "release candidate" : "not a release branch"}</span>
-        </Field>
-        <Field label="Commit">
-          <span className="font-mono text-xs break-all select-all">{build.commit}</span>
-        </Field>
-        <Field label="Received">{formatDayTime(build.receivedAt)}</Field>
-        <Field label="CI pipeline">
-          {build.pipelineUrl ? (
-            <a href={build.pipelineUrl} target="_blank" rel="noreferrer" className="text-tide-700 hover:underline dark:text-tide-300">
-              open pipeline ↗
-            </a>
-          ) : (
-            <span className="text-ink-faint">not given (manual upload)</span>
-          )}
-        </Field>
+        <BuildOriginFields
+          branch={build.branch}
+          branchNote={review.isCandidate ? "release candidate" : "not a release branch"}
+          commit={build.commit}
+          receivedAt={build.receivedAt}
+          pipelineUrl={build.pipelineUrl}
+        />
         <Field label={`Runs (${runTotal})`}>
           <RunCounts counts={build.runCounts} />
         </Field>

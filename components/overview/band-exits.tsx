@@ -7,7 +7,7 @@ import { Panel } from "@/components/ui/panel";
 import { VerdictBadge } from "@/components/ui/verdict-badge";
 import { MORNING_BAND_EXITS, type BandExitRow } from "@/graphql/operations/overview";
 import { formatDelta, formatSig, withUnit } from "@/lib/format/numbers";
-import { BuildName, RunQuantity } from "./build-bits";
+import { BuildName, FindingTable, RunQuantity } from "./build-bits";
 import { runHref, trendHref } from "./links";
 import { groupByBranch } from "./group-by-branch";
 import { formatLimits, relativeChange } from "./quantity-text";
@@ -40,25 +40,19 @@ function BranchExits({ branch, rows }: { branch: string; rows: BandExitRow[] }) 
       <p className="mb-1 text-sm">
         <span className="font-mono text-xs">{branch}</span> · <BuildName build={build} /> <span className="text-ink-faint">against baseline</span> <BuildName build={baseline} />
       </p>
-      <div className="overflow-x-auto">
-        <table className="w-full text-sm">
-          <thead className="text-left text-xs text-ink-faint">
-            <tr>
-              <th className="py-1 pr-3 font-medium">Run · quantity</th>
-              <th className="py-1 pr-3 text-right font-medium">Now</th>
-              <th className="py-1 pr-3 font-medium">Band in force</th>
-              <th className="py-1 pr-3 text-right font-medium">Baseline</th>
-              <th className="py-1 pr-3 text-right font-medium">Change vs baseline</th>
-              <th className="py-1 font-medium" />
-            </tr>
-          </thead>
-          <tbody>
-            {rows.map((r) => (
-              <ExitRow key={`${r.case}|${r.model}|${r.grid}|${r.quantity}`} row={r} />
-            ))}
-          </tbody>
-        </table>
-      </div>
+      <FindingTable
+        columns={[
+          { label: "Run · quantity" },
+          { label: "Now", numeric: true },
+          { label: "Band in force" },
+          { label: "Baseline", numeric: true },
+          { label: "Change vs baseline", numeric: true },
+        ]}
+      >
+        {rows.map((r) => (
+          <ExitRow key={`${r.case}|${r.model}|${r.grid}|${r.quantity}`} row={r} />
+        ))}
+      </FindingTable>
     </div>
   );
 }

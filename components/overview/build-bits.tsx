@@ -86,3 +86,27 @@ export function RunQuantity({ caseKey, model, grid, quantity, label }: { caseKey
     </>
   );
 }
+
+/**
+ * The table both morning-view lists use: one row per run · quantity, a right-aligned
+ * number column wherever `numeric` says so, and a last column for the links.
+ */
+export function FindingTable({ columns, children }: { columns: { label: string; numeric?: boolean }[]; children: React.ReactNode }) {
+  return (
+    <div className="overflow-x-auto">
+      <table className="w-full text-sm">
+        <thead className="text-left text-xs text-ink-faint">
+          <tr>
+            {columns.map((c) => (
+              <th key={c.label} className={`py-1 pr-3 font-medium${c.numeric ? " text-right" : ""}`}>
+                {c.label}
+              </th>
+            ))}
+            <th className="py-1 font-medium" />
+          </tr>
+        </thead>
+        <tbody>{children}</tbody>
+      </table>
+    </div>
+  );
+}

@@ -8,7 +8,7 @@ import { VerdictBadge } from "@/components/ui/verdict-badge";
 import { MORNING_OPEN_DRIFTS, type OpenDriftRow } from "@/graphql/operations/overview";
 import { DRIFT_ALPHA, DRIFT_WINDOW } from "@/lib/evaluation/judge";
 import { formatDelta, formatSig, withUnit } from "@/lib/format/numbers";
-import { BuildName, RunQuantity } from "./build-bits";
+import { BuildName, FindingTable, RunQuantity } from "./build-bits";
 import { groupByBranch } from "./group-by-branch";
 import { runHref, trendHref } from "./links";
 import { relativeChange } from "./quantity-text";
@@ -33,25 +33,19 @@ export function OpenDrifts() {
               <p className="mb-1 text-sm">
                 <span className="font-mono text-xs">{branch}</span> · <BuildName build={rows[0].build} />
               </p>
-              <div className="overflow-x-auto">
-                <table className="w-full text-sm">
-                  <thead className="text-left text-xs text-ink-faint">
-                    <tr>
-                      <th className="py-1 pr-3 font-medium">Run · quantity</th>
-                      <th className="py-1 pr-3 text-right font-medium">Value</th>
-                      <th className="py-1 pr-3 font-medium">Why</th>
-                      <th className="py-1 pr-3 text-right font-medium">Change vs baseline</th>
-                      <th className="py-1 pr-3 text-right font-medium">Trend of the last {DRIFT_WINDOW} builds</th>
-                      <th className="py-1 font-medium" />
-                    </tr>
-                  </thead>
-                  <tbody>
-                    {rows.map((r) => (
-                      <DriftRow key={`${r.case}|${r.model}|${r.grid}|${r.quantity}`} row={r} />
-                    ))}
-                  </tbody>
-                </table>
-              </div>
+              <FindingTable
+                columns={[
+                  { label: "Run · quantity" },
+                  { label: "Value", numeric: true },
+                  { label: "Why" },
+                  { label: "Change vs baseline", numeric: true },
+                  { label: `Trend of the last ${DRIFT_WINDOW} builds`, numeric: true },
+                ]}
+              >
+                {rows.map((r) => (
+                  <DriftRow key={`${r.case}|${r.model}|${r.grid}|${r.quantity}`} row={r} />
+                ))}
+              </FindingTable>
             </div>
           ))}
         </div>

@@ -1,18 +1,10 @@
-// Look of the trend chart. Text and grid take `currentColor` so one chart reads
-// on the light and the dark page; model colours are CSS variables with a light
-// and a dark value (set by TREND_COLOUR_VARS on the chart's wrapper).
+import { plotTheme } from "@/components/charts/chart-theme";
 
-export const trendTheme = {
-  background: "transparent",
-  text: { fontFamily: '"Inter Variable", system-ui, sans-serif', fontSize: 11, fill: "currentColor" },
-  axis: {
-    domain: { line: { stroke: "currentColor", strokeOpacity: 0.5, strokeWidth: 1 } },
-    ticks: { line: { stroke: "currentColor", strokeOpacity: 0.5, strokeWidth: 1 }, text: { fontSize: 10.5, fill: "currentColor" } },
-    legend: { text: { fontSize: 12, fill: "currentColor", fontWeight: 600 } },
-  },
-  grid: { line: { stroke: "currentColor", strokeOpacity: 0.1, strokeWidth: 1 } },
-  crosshair: { line: { stroke: "currentColor", strokeOpacity: 0.5, strokeWidth: 1, strokeDasharray: "4 4" } },
-};
+// Look of the trend chart: the scientific plots' theme (text and grid take
+// `currentColor`, so one chart reads on the light and the dark page); model
+// colours are CSS variables with a light and a dark value (set by
+// TREND_COLOUR_VARS on the chart's wrapper).
+export const trendTheme = plotTheme;
 
 /** Six model colours (tide, ochre, brick, violet, blue, moss): distinct in grey-scale too. */
 export const MODEL_COLOURS = ["var(--trend-m0)", "var(--trend-m1)", "var(--trend-m2)", "var(--trend-m3)", "var(--trend-m4)", "var(--trend-m5)"];

@@ -45,18 +45,22 @@ export async function getNewestBuildsPerBranch({ db, branches, perBranch }: { db
   return result.rows;
 }
 
-export interface BandExitRow {
+/** What every morning-view finding names: the branch head, the run's key and the quantity's value now. */
+export interface HeadQuantityRow {
   head_id: number;
   branch: string;
-  baseline_id: number;
   case_key: string;
   model_key: string;
   grid: string;
   quantity_key: string;
-  baseline_value: number | null;
-  baseline_verdict: Verdict;
   value: number | null;
   verdict: Verdict;
+}
+
+export interface BandExitRow extends HeadQuantityRow {
+  baseline_id: number;
+  baseline_value: number | null;
+  baseline_verdict: Verdict;
   run_id: number | null;
   run_status: string | null;
   reference: number | null;
@@ -92,16 +96,8 @@ export async function getBandExits({ db, branches }: { db: Db; branches: number 
   return result.rows;
 }
 
-export interface OpenDriftRow {
-  head_id: number;
-  branch: string;
+export interface OpenDriftRow extends HeadQuantityRow {
   run_id: number;
-  case_key: string;
-  model_key: string;
-  grid: string;
-  quantity_key: string;
-  value: number | null;
-  verdict: Verdict;
   drift_reason: "baseline" | "trend" | null;
   drift_p_value: number | null;
   drift_slope: number | null;

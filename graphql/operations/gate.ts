@@ -1,23 +1,15 @@
 import { gql, type TypedDocumentNode } from "@apollo/client";
 import type { Verdict } from "@/lib/analysis";
 import type { DecisionState } from "@/lib/validation/gate";
+import type { BuildTableRow, RunStatus } from "./builds";
 
 // Client documents of the release gate, with their result types.
 
 export type GateState = "pending" | DecisionState;
-export type RunStatus = "COMPLETED" | "DIVERGED" | "CRASHED" | "TIMEOUT";
+export type { RunStatus } from "./builds";
 
-export interface GateBuild {
-  id: string;
-  solver: string;
-  version: string;
-  commit: string;
-  branch: string;
-  pipelineUrl: string | null;
-  receivedAt: string;
-  verdict: Verdict;
-  runCounts: Record<Verdict, number>;
-}
+/** A build as the gate screens read it: the build table's row without its gate state. */
+export type GateBuild = Omit<BuildTableRow, "gate">;
 
 export interface GateCandidateItem {
   build: GateBuild;

@@ -2,7 +2,7 @@ import "server-only";
 import { z } from "zod";
 import { getDb } from "@/db";
 import { getBuildsByIds, type BuildRow } from "@/db/queries/builds";
-import { getBandExits, getNewestBuildsPerBranch, getOpenDrifts } from "@/db/queries/overview";
+import { getBandExits, getNewestBuildsPerBranch, getOpenDrifts, type HeadQuantityRow } from "@/db/queries/overview";
 import { countSettledUndecidedCandidates, getAwaitingReleaseCandidates } from "@/db/queries/release-candidates";
 import type { Actor } from "./actor";
 import { requirePerson } from "./authorize";
@@ -43,22 +43,29 @@ export async function findBranchActivity({ actor, branches, unsafeInput }: { act
   return out;
 }
 
-/** Quantities of each branch head that left their band since the branch baseline. */
-export async function findBandExits({ actor, branches }: { actor: Actor | null; branches: number }) {
-  requirePerson(actor);
-  const rows = await getBandExits({ db: getDb(), branches });
-  return rows.map((r) => ({
+/** The fields every morning-view finding shares, in the API's names. */
+function headQuantityFields(r: HeadQuantityRow) {
+  return {
     branch: r.branch,
     buildId: r.head_id,
-    baselineBuildId: r.baseline_id,
-    runId: r.run_id,
-    runStatus: r.run_status,
     case: r.case_key,
     model: r.model_key,
     grid: r.grid,
     quantity: r.quantity_key,
     value: r.value,
     verdict: r.verdict,
+  };
+}
+
+/** Quantities of each branch head that left their band since the branch baseline. */
+export async function findBandExits({ actor, branches }: { actor: Actor | null; branches: number }) {
+  requirePerson(actor);
+  const rows = await getBandExits({ db: getDb(), branches });
+  return rows.map((r) => ({
+    ...headQuantityFields(r),
+    baselineBuildId: r.baseline_id,
+    runId: r.run_id,
+    runStatus: r.run_status,
     baselineValue: r.baseline_value,
     baselineVerdict: r.baseline_verdict,
     reference: r.reference,
@@ -73,15 +80,8 @@ export async function findOpenDrifts({ actor, branches }: { actor: Actor | null;
   requirePerson(actor);
   const rows = await getOpenDrifts({ db: getDb(), branches });
   return rows.map((r) => ({
-    branch: r.branch,
-    buildId: r.head_id,
+    ...headQuantityFields(r),
     runId: r.run_id,
-    case: r.case_key,
-    model: r.model_key,
-    grid: r.grid,
-    quantity: r.quantity_key,
-    value: r.value,
-    verdict: r.verdict,
     reason: r.drift_reason,
     pValue: r.drift_p_value,
     slopePerBuild: r.drift_slope,
