@@ -6,6 +6,7 @@ import type { RequestNote } from "@/lib/http/request-log";
 import { getEnv } from "@/lib/env";
 import { ENVELOPE_ALLOWANCE } from "@/lib/http/body-limit";
 import { getLogger } from "@/lib/log";
+import { Utf8Response } from "@/lib/http/utf8-response";
 import { createContext, type GraphQLContext } from "./context";
 import { documentLimitPlugins } from "./guards/limits";
 import { useRequestGate } from "./guards/request-gate";
@@ -39,7 +40,7 @@ export const yoga = createYoga<ServerContext, GraphQLContext>({
   schema,
   graphqlEndpoint: "/api/graphql",
   context: createContext,
-  fetchAPI: { Response },
+  fetchAPI: { Response: Utf8Response },
   graphiql: !production,
   landingPage: false,
   // yoga's own messages (parse failures, plugin warnings) as pino lines with the

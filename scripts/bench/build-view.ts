@@ -1,8 +1,8 @@
 import { Client } from "pg";
-import { graphQLBody, postGraphQLBody, requireEnv } from "./http";
+import { exchangeGraphQL, graphQLBody, postGraphQLBody, requireEnv } from "./http";
 import { generateBenchRuns, withFreshBuild } from "./payload";
 import { BENCH_APPLICATION_NAME, StatementLog, captureRequestStatements, replayStatements } from "./statement-count";
-import { ratio, timeRepeated, type Timing } from "./stats";
+import { measureRepeated, ratio, summarise, timeRepeated, type Timing } from "./stats";
 
 // Section 3: the build page's query, build(id), for a build of many runs.
 
@@ -29,16 +29,31 @@ export interface BuildViewResult {
   bare: Timing;
   buildRatio: number;
   statements: { runs: number; count: number }[];
+  /** The answer: JSON bytes, bytes on the wire and their encoding. */
+  answerBytes: number;
+  wireBytes: number;
+  encoding: string;
+  /** The client's own decoding and JSON.parse of the answer, after the clock stopped. */
+  clientDecode: Timing;
 }
 
 export async function benchBuildView({ buildId, smallBuildId, repeats, cookie }: { buildId: string; smallBuildId: string; repeats: number; cookie: string }): Promise<BuildViewResult> {
   const body = graphQLBody(BUILD, { id: buildId });
   let runs = 0;
   let quantityValues = 0;
-  const http = await timeRepeated(async () => {
-    const data = (await postGraphQLBody(body, { cookie })) as { build: { runs: { quantities: unknown[] }[] } };
+  let answerBytes = 0;
+  let wireBytes = 0;
+  let encoding = "";
+  const decodeSamples: number[] = [];
+  const http = await measureRepeated(async (i) => {
+    const exchange = await exchangeGraphQL(body, { cookie });
+    const data = exchange.data as { build: { runs: { quantities: unknown[] }[] } };
     runs = data.build.runs.length;
     quantityValues = data.build.runs.reduce((s, r) => s + r.quantities.length, 0);
+    answerBytes = Buffer.byteLength(JSON.stringify({ data }));
+    ({ wireBytes, encoding } = exchange);
+    if (i >= 0) decodeSamples.push(exchange.clientMs);
+    return exchange.ms;
   }, repeats, 2);
 
   // The bare side: the statements this very request sends (session check
@@ -76,7 +91,10 @@ export async function benchBuildView({ buildId, smallBuildId, repeats, cookie }:
     await log.setLogging(false).catch(() => undefined);
     await log.close();
   }
-  return { runs, quantityValues, http, bare, buildRatio: ratio(http.median, bare.median), statements: counted };
+  return {
+    runs, quantityValues, http, bare, buildRatio: ratio(http.median, bare.median), statements: counted,
+    answerBytes, wireBytes, encoding, clientDecode: summarise(decodeSamples),
+  };
 }
 
 const SUBMIT = /* GraphQL */ `mutation Submit($input: ResultSubmission!) { submitResults(input: $input) { build { id } } }`;

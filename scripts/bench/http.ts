@@ -1,4 +1,6 @@
 import { readFileSync } from "node:fs";
+import http from "node:http";
+import zlib from "node:zlib";
 import { signInAt } from "../../tests/helpers/session";
 
 // Talking to the running app as CI and as a signed-in person do.
@@ -11,22 +13,95 @@ export function requireEnv(name: string): string {
 
 export const appUrl = () => requireEnv("APP_URL");
 
-/** Posts a GraphQL body (already serialised, so the timing excludes our own JSON.stringify) and checks for errors. */
-export async function postGraphQLBody(body: string, auth: { token?: string; cookie?: string }): Promise<unknown> {
-  const res = await fetch(`${appUrl()}/api/graphql`, {
-    method: "POST",
-    headers: {
-      "content-type": "application/json",
-      accept: "application/graphql-response+json, application/json",
-      ...(auth.token ? { authorization: `Bearer ${auth.token}` } : {}),
-      ...(auth.cookie ? { cookie: auth.cookie } : {}),
-    },
-    body,
+/** What one timed exchange with the API gave. */
+export interface Exchange {
+  /** Milliseconds from the request's first byte sent to the answer's last byte received. */
+  ms: number;
+  data: unknown;
+  status: number;
+  /** Bytes on the wire and the encoding they came in (gzip, br or identity). */
+  wireBytes: number;
+  encoding: string;
+  /** Milliseconds the client then spent decoding and parsing the answer (outside `ms`). */
+  clientMs: number;
+}
+
+// One kept-alive connection, as a CI job or a page's client holds: the timing
+// excludes connection set-up, as the bare side's pg connection is open too.
+const agent = new http.Agent({ keepAlive: true, maxSockets: 1 });
+
+/**
+ * Posts a GraphQL body (already serialised, so our own JSON.stringify is not
+ * timed) and checks the answer for errors. Offers the encodings a browser does
+ * over HTTPS. The clock runs from the request's first byte to the answer's last
+ * byte: the server's work and the transfer. Decompressing and JSON.parse are
+ * the client's own work and are timed apart (clientMs), after the clock stops,
+ * as the bare side's timing ends when pg has the rows.
+ */
+export function exchangeGraphQL(body: string, auth: { token?: string; cookie?: string }): Promise<Exchange> {
+  const url = new URL("/api/graphql", appUrl());
+  return new Promise((resolve, reject) => {
+    const started = process.hrtime.bigint();
+    const req = http.request(url, {
+      method: "POST",
+      agent,
+      headers: {
+        "content-type": "application/json",
+        "content-length": Buffer.byteLength(body),
+        accept: "application/graphql-response+json, application/json",
+        "accept-encoding": process.env.BENCH_ACCEPT_ENCODING ?? "gzip, deflate, br",
+        ...(auth.token ? { authorization: `Bearer ${auth.token}` } : {}),
+        ...(auth.cookie ? { cookie: auth.cookie } : {}),
+      },
+    });
+    req.on("error", reject);
+    req.on("response", (res) => {
+      const chunks: Buffer[] = [];
+      res.on("data", (c: Buffer) => chunks.push(c));
+      res.on("error", reject);
+      res.on("end", () => {
+        const ms = Number(process.hrtime.bigint() - started) / 1e6;
+        try {
+          const decodeStarted = process.hrtime.bigint();
+          const wire = Buffer.concat(chunks);
+          const encoding = String(res.headers["content-encoding"] ?? "identity");
+          const text = decode(wire, encoding).toString("utf8");
+          const parsed = JSON.parse(text) as { data?: unknown; errors?: { message: string }[] };
+          const clientMs = Number(process.hrtime.bigint() - decodeStarted) / 1e6;
+          if (parsed.errors?.length) throw new Error(`GraphQL error (${res.statusCode}): ${parsed.errors[0].message.slice(0, 300)}`);
+          resolve({ ms, data: parsed.data, status: res.statusCode ?? 0, wireBytes: wire.byteLength, encoding, clientMs });
+        } catch (error) {
+          reject(error);
+        }
+      });
+    });
+    req.end(body);
   });
-  const text = await res.text();
-  const parsed = JSON.parse(text) as { data?: unknown; errors?: { message: string }[] };
-  if (parsed.errors?.length) throw new Error(`GraphQL error (${res.status}): ${parsed.errors[0].message.slice(0, 300)}`);
-  return parsed.data;
+}
+
+/** Closes the kept-alive connection (end of the bench). */
+export function closeConnections(): void {
+  agent.destroy();
+}
+
+function decode(wire: Buffer, encoding: string): Buffer {
+  if (encoding === "gzip") return zlib.gunzipSync(wire);
+  if (encoding === "br") return zlib.brotliDecompressSync(wire);
+  if (encoding === "deflate") return zlib.inflateSync(wire);
+  if (encoding === "identity") return wire;
+  throw new Error(`unexpected Content-Encoding ${encoding}`);
+}
+
+/** The data of a GraphQL answer (errors throw), for calls that are not timed or time themselves. */
+export async function postGraphQLBody(body: string, auth: { token?: string; cookie?: string }): Promise<unknown> {
+  return (await exchangeGraphQL(body, auth)).data;
+}
+
+/** The server-and-wire time of a GraphQL exchange, for timeRequests. */
+export async function timedGraphQL(body: string, auth: { token?: string; cookie?: string }, onData?: (data: unknown) => void): Promise<number> {
+  const exchange = await exchangeGraphQL(body, auth);
+  onData?.(exchange.data);
+  return exchange.ms;
 }
 
 export function graphQLBody(query: string, variables: Record<string, unknown>): string {

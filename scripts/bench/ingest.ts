@@ -1,9 +1,9 @@
 import { Client } from "pg";
 import type { FitSettings } from "@/lib/evaluation/types";
-import { graphQLBody, postGraphQLBody, readServerPeakRssMb, requireEnv, appUrl } from "./http";
+import { graphQLBody, postGraphQLBody, readServerPeakRssMb, requireEnv, appUrl, timedGraphQL } from "./http";
 import { writeFloorSubmission } from "./floor";
 import { generateBenchRuns, withFreshBuild } from "./payload";
-import { ratio, summarise, timeOnce, timeRepeated, type Timing } from "./stats";
+import { measureRepeated, ratio, summarise, timeOnce, timeRepeated, type Timing } from "./stats";
 
 // Section 1: the CI ingest through real HTTP against its floor.
 
@@ -58,14 +58,13 @@ export async function benchIngest({ runs, repeats, label }: { runs: number; repe
       await postGraphQLBody(bareBody, { token });
     }
     for (let i = 1; i <= repeats; i++) {
-      const e = await timeOnce(async () => {
-        const data = (await postGraphQLBody(endpointBodies[i], { token })) as { submitResults: { build: { id: string } } };
-        lastBuildId = data.submitResults.build.id;
+      const e = await timedGraphQL(endpointBodies[i], { token }, (data) => {
+        lastBuildId = (data as { submitResults: { build: { id: string } } }).submitResults.build.id;
       });
       const f = await timeOnce(() => writeFloorSubmission(client, floorBodies[i], settings));
       endpointSamples.push(e);
       floorSamples.push(f);
-      bareSamples.push(await timeOnce(() => postGraphQLBody(bareBody, { token })));
+      bareSamples.push(await timedGraphQL(bareBody, { token }));
     }
     const endpoint = summarise(endpointSamples);
     const floor = summarise(floorSamples);
@@ -105,7 +104,7 @@ export async function benchBareRoute(repeats: number): Promise<Timing> {
     const res = await fetch(`${appUrl()}/api/health`);
     await res.text();
   }, repeats, 3);
-  const bare = await timeRepeated(() => postGraphQLBody(body, { token }), repeats, 3);
+  const bare = await measureRepeated(() => timedGraphQL(body, { token }), repeats, 3);
   console.log(
     `[bench] bare route = POST /api/graphql with the small submission's ${(Buffer.byteLength(body) / 1e6).toFixed(2)} MB body and { _version }: ` +
       `median ${bare.median.toFixed(1)} ms (GET /api/health, no body: ${health.median.toFixed(1)} ms)`,

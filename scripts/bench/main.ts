@@ -2,7 +2,7 @@ import { mkdirSync, writeFileSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { benchBuildView, postViewBuilds } from "./build-view";
-import { signIn } from "./http";
+import { closeConnections, signIn } from "./http";
 import { benchBareRoute, benchIngest } from "./ingest";
 import { benchKernels } from "./kernels";
 import { printReport, summariseTargets, type BenchReport } from "./report";
@@ -80,6 +80,7 @@ async function main() {
   // Samples kept: the medians alone hide a bimodal run.
   writeFileSync(path.join(dir, file), `${JSON.stringify(report, null, 2)}\n`);
   console.log(`[bench] wrote ${path.join(dir, file)}`);
+  closeConnections();
 }
 
 main().catch((error: unknown) => {

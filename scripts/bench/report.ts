@@ -93,12 +93,13 @@ function printTrend(trend: TrendSize[]): void {
   for (const t of trend) {
     console.log(`       ${pad(String(t.history), 8)} ${pad(String(t.last), 7)} ${pad(ms(t.http.median), 12)} ${pad(ms(t.bare.median), 12)} ${pad(t.trendRatio.toFixed(2), 6)} ${pad(t.httpPerPointMs.toFixed(4), 14)} ${pad(t.seedSeconds.toFixed(1), 7)} ${pad(String(t.statements), 11)} ${ms(t.emptyQuery.median)}`);
   }
-  console.log("       (empty query: the same signed-in POST asking { _version }, no data: the round trip's fixed part)");
+  console.log("       (http: request's first byte to the answer's last byte; empty query: the same signed-in POST asking { _version }, no data: the round trip's fixed part)");
   for (const t of trend) console.log(`       plan at ${t.history}: ${t.plan.join(" > ")}`);
 }
 
 function printBuildView(b: BuildViewResult): void {
   console.log(`\nBuild view: ${b.runs} runs, ${b.quantityValues} values; http ${ms(b.http.median)} ms, bare SQL ${ms(b.bare.median)} ms, ratio ${b.buildRatio.toFixed(2)}`);
+  console.log(`  answer ${(b.answerBytes / 1e6).toFixed(2)} MB of JSON, ${(b.wireBytes / 1e3).toFixed(0)} kB on the wire (${b.encoding}); the client's decoding and JSON.parse after the last byte: ${ms(b.clientDecode.median)} ms (not in http)`);
   console.log(`  SQL statements per request: ${b.statements.map((s) => `${s.count} (${s.runs} runs)`).join(", ")}`);
 }
 

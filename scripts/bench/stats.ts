@@ -21,6 +21,14 @@ export async function timeRepeated(fn: (i: number) => Promise<unknown> | unknown
   return summarise(samples);
 }
 
+/** Like timeRepeated for calls that measure themselves (e.g. to an answer's last byte) and return milliseconds. */
+export async function measureRepeated(fn: (i: number) => Promise<number>, repeats: number, warmup = 1): Promise<Timing> {
+  for (let i = 0; i < warmup; i++) await fn(-1 - i);
+  const samples: number[] = [];
+  for (let i = 0; i < repeats; i++) samples.push(await fn(i));
+  return summarise(samples);
+}
+
 export function summarise(samples: number[]): Timing {
   return { samples, median: quantile(samples, 0.5), p95: quantile(samples, 0.95) };
 }

@@ -1,7 +1,7 @@
 import { Client } from "pg";
-import { graphQLBody, postGraphQLBody, requireEnv } from "./http";
+import { graphQLBody, requireEnv, timedGraphQL } from "./http";
 import { BENCH_APPLICATION_NAME, captureRequestStatements, replayStatements } from "./statement-count";
-import { ratio, timeRepeated, type Timing } from "./stats";
+import { measureRepeated, ratio, timeRepeated, type Timing } from "./stats";
 
 // Section 2: trend(case, quantity, model, branch, last) as history grows. Each
 // history size lives on a branch of its own in the same tables, so the larger
@@ -75,18 +75,18 @@ export async function benchTrend({ sizes, last, repeats, cookie }: { sizes: numb
       const variables = { case: SERIES.case, quantity: SERIES.quantity, model: SERIES.model, branch, last };
       const body = graphQLBody(TREND, variables);
       let points = 0;
-      const ask = async () => {
-        const data = (await postGraphQLBody(body, { cookie })) as { trend: { points: unknown[] } };
-        points = data.trend.points.length;
-      };
+      const ask = () =>
+        timedGraphQL(body, { cookie }, (data) => {
+          points = (data as { trend: { points: unknown[] } }).trend.points.length;
+        });
       // The bare side is the very SQL this request sends (session check
       // included), taken from PostgreSQL's log and replayed with pg.
       const statements = await captureRequestStatements(ask);
       const trendStatement = statements.find((s) => /from quantity_values/i.test(s.text));
       if (!trendStatement) throw new Error(`trend request sent no quantity_values statement (${statements.length} statements logged)`);
-      const http = await timeRepeated(ask, repeats, 3);
+      const http = await measureRepeated(ask, repeats, 3);
       const emptyBody = graphQLBody("query Empty { _version }", {});
-      const emptyQuery = await timeRepeated(() => postGraphQLBody(emptyBody, { cookie }), repeats, 3);
+      const emptyQuery = await measureRepeated(() => timedGraphQL(emptyBody, { cookie }), repeats, 3);
       const bare = await timeRepeated(() => replayStatements(client, statements), repeats, 3);
       const returned = Math.max(points, 1);
       const explained = await client.query<{ "QUERY PLAN": [{ Plan: PlanNode }] }>(`explain (format json) ${trendStatement.text}`, trendStatement.params);

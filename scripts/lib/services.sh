@@ -63,7 +63,8 @@ start_web() {
   local pid_file="$1" log_file="$2"
   port_in_use "$PORT" && die "port $PORT is taken by another program: set PORT to a free port"
   say "starting the web server on $APP_URL (log: $log_file)"
-  start_detached "$pid_file" "$log_file" ./node_modules/.bin/next start -H 127.0.0.1 -p "$PORT"
+  start_detached "$pid_file" "$log_file" env NODE_OPTIONS="${NODE_OPTIONS:+$NODE_OPTIONS }$TAULINE_SERVER_NODE_OPTIONS" \
+    ./node_modules/.bin/next start -H 127.0.0.1 -p "$PORT"
   wait_for_health "$pid_file" "$log_file"
 }
 
