@@ -70,7 +70,7 @@ const pad = (s: string, n: number) => s.padEnd(n);
 export function printReport(r: BenchReport): void {
   const m = r.machine;
   console.log(`\nTauline bench ${r.ranAt}${r.quick ? " (QUICK: reduced sizes)" : ""} — ${m.cpus} × ${m.cpuModel}, ${m.memoryGb.toFixed(1)} GB, Node ${m.node}`);
-  if (r.bareRoute) console.log(`\nbare route GET /api/health: median ${ms(r.bareRoute.median)} ms`);
+  if (r.bareRoute) console.log(`\nbare route (the small submission's body posted asking only { _version }): median ${ms(r.bareRoute.median)} ms`);
   if (r.ingest) printIngest(r.ingest);
   if (r.trend) printTrend(r.trend);
   if (r.buildView) printBuildView(r.buildView);
