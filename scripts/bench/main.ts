@@ -50,7 +50,7 @@ async function main() {
     step("bare route");
     report.bareRoute = await benchBareRoute(20);
     step("ingest: small submission");
-    const small = await benchIngest({ runs: 5, repeats: 7, label: "small" });
+    const small = await benchIngest({ runs: 5, repeats: quick ? 7 : 21, label: "small" });
     step("ingest: large submission");
     const large = await benchIngest({ runs: largeRuns, repeats: quick ? 2 : 6, label: "large" });
     report.ingest = [small, large];
@@ -64,7 +64,7 @@ async function main() {
     step("build view");
     // The ingest section's last builds when it ran; else builds posted for this section.
     const ids = report.ingest ? { buildId: report.ingest[1].lastBuildId, smallBuildId: report.ingest[0].lastBuildId } : await postViewBuilds(largeRuns);
-    report.buildView = await benchBuildView({ ...ids, repeats: quick ? 3 : 10, cookie });
+    report.buildView = await benchBuildView({ ...ids, repeats: quick ? 3 : 20, cookie });
   }
   if (runs("kernels")) {
     step("kernels");
