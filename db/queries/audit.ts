@@ -1,5 +1,6 @@
 import "server-only";
 import type { Db } from "../index";
+import { prepared } from "../prepared";
 
 export interface AuditEntry {
   actorUserId: number | null;
@@ -12,7 +13,7 @@ export interface AuditEntry {
 }
 
 export async function insertAuditEntry({ db, entry }: { db: Db; entry: AuditEntry }) {
-  await db("audit_log").insert({
+  const insert = db("audit_log").insert({
     actor_user_id: entry.actorUserId,
     actor_label: entry.actorLabel,
     action: entry.action,
@@ -21,4 +22,5 @@ export async function insertAuditEntry({ db, entry }: { db: Db; entry: AuditEntr
     details: JSON.stringify(entry.details ?? {}),
     ...(entry.at ? { at: entry.at } : {}),
   });
+  await insert.options(prepared(insert.toSQL().sql));
 }

@@ -1,5 +1,6 @@
 import "server-only";
 import type { Db } from "../index";
+import { prepared } from "../prepared";
 import { VERDICT_ORDER, type Verdict } from "@/lib/analysis";
 
 export interface BuildRow {
@@ -13,6 +14,15 @@ export interface BuildRow {
   updated_at: Date;
   verdict: Verdict;
 }
+
+/** BuildRow's columns, named where a statement is prepared (db/prepared.ts: no `*` there). */
+const BUILD_COLUMNS = ["id", "solver", "version", "commit", "branch", "pipeline_url", "received_at", "updated_at", "verdict"] as const;
+
+const UPSERT_BUILD = `insert into builds (solver, version, commit, branch, pipeline_url, received_at, updated_at)
+     values (?, ?, ?, ?, ?, coalesce(?::timestamptz, now()), coalesce(?::timestamptz, now()))
+     on conflict (commit) do update
+       set updated_at = now(), version = excluded.version, pipeline_url = coalesce(excluded.pipeline_url, builds.pipeline_url)
+     returning ${BUILD_COLUMNS.join(", ")}, (xmax = 0) as created`;
 
 /**
  * Finds the build of this commit or creates it, in one statement, and locks its
@@ -31,14 +41,9 @@ export async function upsertBuildForUpdate({
   build: { solver: string; version: string; commit: string; branch: string; pipelineUrl?: string | null };
   receivedAt?: Date;
 }): Promise<{ row: BuildRow; created: boolean }> {
-  const result: { rows: (BuildRow & { created: boolean })[] } = await db.raw(
-    `insert into builds (solver, version, commit, branch, pipeline_url, received_at, updated_at)
-     values (?, ?, ?, ?, ?, coalesce(?::timestamptz, now()), coalesce(?::timestamptz, now()))
-     on conflict (commit) do update
-       set updated_at = now(), version = excluded.version, pipeline_url = coalesce(excluded.pipeline_url, builds.pipeline_url)
-     returning *, (xmax = 0) as created`,
-    [build.solver, build.version, build.commit, build.branch, build.pipelineUrl ?? null, receivedAt ?? null, receivedAt ?? null],
-  );
+  const result: { rows: (BuildRow & { created: boolean })[] } = await db
+    .raw(UPSERT_BUILD, [build.solver, build.version, build.commit, build.branch, build.pipelineUrl ?? null, receivedAt ?? null, receivedAt ?? null])
+    .options(prepared(UPSERT_BUILD));
   // xmax is 0 on a freshly inserted row version and set on one written by the DO UPDATE branch.
   const { created, ...row } = result.rows[0];
   return { row, created };
@@ -54,13 +59,12 @@ export async function getBuildByCommit({ db, commit }: { db: Db; commit: string 
 }
 
 /** Sets the build's verdict to its worst run's (VERDICT_ORDER; no runs: 'missing') in one statement. */
-export async function setBuildVerdict({ db, buildId }: { db: Db; buildId: number }): Promise<Verdict> {
-  const result: { rows: { verdict: Verdict }[] } = await db.raw(
-    `update builds set verdict = coalesce(
+const SET_BUILD_VERDICT = `update builds set verdict = coalesce(
        (select r.verdict from runs r where r.build_id = builds.id order by array_position(?::text[], r.verdict) desc limit 1), 'missing')
-     where id = ? returning verdict`,
-    [[...VERDICT_ORDER], buildId],
-  );
+     where id = ? returning verdict`;
+
+export async function setBuildVerdict({ db, buildId }: { db: Db; buildId: number }): Promise<Verdict> {
+  const result: { rows: { verdict: Verdict }[] } = await db.raw(SET_BUILD_VERDICT, [[...VERDICT_ORDER], buildId]).options(prepared(SET_BUILD_VERDICT));
   return result.rows[0].verdict;
 }
 
@@ -109,11 +113,11 @@ export async function getBaselineBuild({
       `(select d.state from gate_decisions d where d.build_id = b.id order by d.decided_at desc, d.id desc limit 1) = 'approved'`,
     )
     .orderBy([{ column: "b.received_at", order: "desc" }, { column: "b.id", order: "desc" }])
-    .select("b.*")
+    .select(BUILD_COLUMNS.map((c) => `b.${c}`))
     .first();
   if (before) q.where("b.received_at", "<", before);
   if (excludeId !== undefined) q.whereNot("b.id", excludeId);
-  return q;
+  return q.options(prepared(q.toSQL().sql));
 }
 
 export async function getBranches({ db }: { db: Db }): Promise<string[]> {

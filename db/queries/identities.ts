@@ -1,5 +1,6 @@
 import "server-only";
 import type { Db } from "../index";
+import { prepared } from "../prepared";
 
 export type Role = "developer" | "qa" | "release" | "admin";
 
@@ -27,14 +28,7 @@ export interface CiTokenRow {
   revoked_at: Date | null;
 }
 
-/**
- * A usable token by its hash: not revoked, not expired. Records its use, at most
- * once a minute: every CI request would otherwise write (and row-lock) the same
- * token row, which serialises concurrent submissions behind one another.
- */
-export async function useCiTokenByHash({ db, tokenHash }: { db: Db; tokenHash: string }): Promise<CiTokenRow | undefined> {
-  const result = await db.raw<{ rows: CiTokenRow[] }>(
-    `with usable as (
+const USE_CI_TOKEN = `with usable as (
        select id, name, expires_at, revoked_at, last_used_at from ci_tokens
         where token_hash = ? and revoked_at is null and (expires_at is null or expires_at > now())
      ), touched as (
@@ -42,8 +36,15 @@ export async function useCiTokenByHash({ db, tokenHash }: { db: Db; tokenHash: s
         where ci_tokens.id = usable.id and (usable.last_used_at is null or usable.last_used_at < now() - interval '1 minute')
        returning ci_tokens.id
      )
-     select id, name, expires_at, revoked_at from usable`,
-    [tokenHash],
-  );
+     select id, name, expires_at, revoked_at from usable`;
+
+/**
+ * A usable token by its hash: not revoked, not expired. Records its use, at most
+ * once a minute: every CI request would otherwise write (and row-lock) the same
+ * token row, which serialises concurrent submissions behind one another.
+ */
+export async function useCiTokenByHash({ db, tokenHash }: { db: Db; tokenHash: string }): Promise<CiTokenRow | undefined> {
+  const result = await db.raw<{ rows: CiTokenRow[] }>(USE_CI_TOKEN, [tokenHash]).options(prepared(USE_CI_TOKEN));
   return result.rows[0];
 }
+

@@ -1,5 +1,6 @@
 import "server-only";
 import type { Db } from "../index";
+import { prepared } from "../prepared";
 import type { Verdict } from "@/lib/analysis";
 
 export interface QuantityValueRow {
@@ -39,6 +40,19 @@ export async function getValuesOfBuild({ db, buildId }: { db: Db; buildId: numbe
   return new Map(rows.map((r) => [seriesKey(r.case_key, r.model_key, r.grid, r.quantity_key), r.value]));
 }
 
+const RECENT_VALUES = `select k.case_key, k.model_key, k.grid, k.quantity_key, h.values
+       from unnest(?::text[], ?::text[], ?::text[], ?::text[]) as k(case_key, model_key, grid, quantity_key)
+       cross join lateral (
+         select array_agg(p.value order by p.build_received_at, p.build_id) as values
+           from (select v.value, v.build_received_at, v.build_id
+                   from quantity_values v
+                  where v.case_key = k.case_key and v.quantity_key = k.quantity_key and v.model_key = k.model_key
+                    and v.branch = ? and v.grid = k.grid and v.build_received_at < ? and v.value is not null
+                  order by v.build_received_at desc, v.build_id desc
+                  limit ?) as p
+       ) as h
+      where h.values is not null`;
+
 /**
  * The last `perKey` non-null values on a branch before a time for each
  * (case, model, grid, quantity) of a submission, oldest first — the history drift
@@ -61,29 +75,18 @@ export async function getRecentValues({
 }): Promise<Map<string, number[]>> {
   const out = new Map<string, number[]>();
   if (keys.length === 0) return out;
-  const result: { rows: { case_key: string; model_key: string; grid: string; quantity_key: string; values: number[] }[] } = await db.raw(
-    `select k.case_key, k.model_key, k.grid, k.quantity_key, h.values
-       from unnest(?::text[], ?::text[], ?::text[], ?::text[]) as k(case_key, model_key, grid, quantity_key)
-       cross join lateral (
-         select array_agg(p.value order by p.build_received_at, p.build_id) as values
-           from (select v.value, v.build_received_at, v.build_id
-                   from quantity_values v
-                  where v.case_key = k.case_key and v.quantity_key = k.quantity_key and v.model_key = k.model_key
-                    and v.branch = ? and v.grid = k.grid and v.build_received_at < ? and v.value is not null
-                  order by v.build_received_at desc, v.build_id desc
-                  limit ?) as p
-       ) as h
-      where h.values is not null`,
-    [
-      keys.map((k) => k.caseKey),
-      keys.map((k) => k.modelKey),
-      keys.map((k) => k.grid),
-      keys.map((k) => k.quantityKey),
-      branch,
-      before,
-      perKey,
-    ],
-  );
+  const bindings = [
+    keys.map((k) => k.caseKey),
+    keys.map((k) => k.modelKey),
+    keys.map((k) => k.grid),
+    keys.map((k) => k.quantityKey),
+    branch,
+    before,
+    perKey,
+  ];
+  const result: { rows: { case_key: string; model_key: string; grid: string; quantity_key: string; values: number[] }[] } = await db
+    .raw(RECENT_VALUES, bindings)
+    .options(prepared(RECENT_VALUES));
   for (const r of result.rows) out.set(seriesKey(r.case_key, r.model_key, r.grid, r.quantity_key), r.values.map(Number));
   return out;
 }

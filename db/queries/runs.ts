@@ -1,5 +1,6 @@
 import "server-only";
 import type { Db } from "../index";
+import { prepared } from "../prepared";
 import type { Verdict } from "@/lib/analysis";
 import type { RunSubmission } from "@/lib/validation/submission";
 
@@ -46,14 +47,16 @@ export async function deleteRunsByKeys({ db, buildId, runs }: { db: Db; buildId:
  * concurrent re-post of the same build may already have replaced the rows it
  * inserted, and then the receipt shows the replacement, not a vanished id.
  */
+const RUNS_BY_KEYS = `select r.id, r.build_id, r.case_key, r.model_key, r.grid, r.status, r.iterations, r.wall_seconds, r.verdict, r.received_at
+       from unnest(?::text[], ?::text[], ?::text[]) with ordinality as k(case_key, model_key, grid, n)
+       join runs r on r.build_id = ? and r.case_key = k.case_key and r.model_key = k.model_key and r.grid = k.grid
+      order by k.n`;
+
 export async function getRunsByKeys({ db, buildId, runs }: { db: Db; buildId: number; runs: readonly Pick<NewRun, "case" | "model" | "grid">[] }): Promise<RunRow[]> {
   if (runs.length === 0) return [];
-  const result: { rows: RunRow[] } = await db.raw(
-    `select r.* from unnest(?::text[], ?::text[], ?::text[]) with ordinality as k(case_key, model_key, grid, n)
-       join runs r on r.build_id = ? and r.case_key = k.case_key and r.model_key = k.model_key and r.grid = k.grid
-      order by k.n`,
-    [runs.map((r) => r.case), runs.map((r) => r.model), runs.map((r) => r.grid), buildId],
-  );
+  const result: { rows: RunRow[] } = await db
+    .raw(RUNS_BY_KEYS, [runs.map((r) => r.case), runs.map((r) => r.model), runs.map((r) => r.grid), buildId])
+    .options(prepared(RUNS_BY_KEYS));
   return result.rows;
 }
 

@@ -1,5 +1,6 @@
 import "server-only";
 import type { Db } from "../index";
+import { prepared } from "../prepared";
 import type { Role } from "./identities";
 
 export type AccountStatus = "active" | "invited" | "deactivated";
@@ -105,8 +106,10 @@ export interface SessionAccount {
   sessions_valid_from: Date | null;
 }
 
+/** Read on every signed-in request (lib/auth/session.ts), hence prepared. */
 export async function getSessionAccount({ db, id }: { db: Db; id: number }): Promise<SessionAccount | undefined> {
-  return db("users").where({ id }).first("id", "email", "name", "role", "active", "sessions_valid_from");
+  const q = db("users").where({ id }).first("id", "email", "name", "role", "active", "sessions_valid_from");
+  return q.options(prepared(q.toSQL().sql));
 }
 
 export interface InviteRow {

@@ -1,5 +1,6 @@
 import "server-only";
 import { getDb } from "@/db";
+import { prepared } from "@/db/prepared";
 import { insertAuditEntry } from "@/db/queries/audit";
 import { getBaselineBuild, setBuildVerdict, upsertBuildForUpdate } from "@/db/queries/builds";
 import { getBandsInForce, getCases, getModelKeys, type CaseRow } from "@/db/queries/library";
@@ -87,13 +88,14 @@ export async function submitResults({
     // A build created by this post holds only its runs: when none of them is
     // alarming, the alert check (three reads of what was just written) can only say no.
     const alerts = created && !alarming ? { outboxIds: [] } : await recordAlertsForSubmission(trx, { buildId: build.id, backdated: receivedAt !== undefined });
-    await trx("submissions").insert({
+    const submission = trx("submissions").insert({
       build_id: build.id,
       ci_token_id: actor.kind === "ci" ? actor.tokenId : null,
       user_id: actorUserId(actor),
       run_count: input.runs.length,
       ...(receivedAt ? { received_at: receivedAt } : {}),
     });
+    await submission.options(prepared(submission.toSQL().sql));
     await insertAuditEntry({
       db: trx,
       entry: {

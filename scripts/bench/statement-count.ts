@@ -1,5 +1,6 @@
 import { openSync, readSync, closeSync, statSync } from "node:fs";
 import { Client } from "pg";
+import { prepared } from "@/db/prepared";
 import { requireEnv } from "./http";
 
 // The SQL statements one HTTP request issues, read from PostgreSQL's own log.
@@ -125,8 +126,14 @@ function readFrom(file: string, offset: number): string {
 }
 
 /** Sends the logged statements again, one after the other, as the request's bare SQL. */
+/**
+ * Runs the logged statements again, one after another, each as a prepared
+ * statement (named after its text, like the server's hot statements,
+ * db/prepared.ts): the bare side gets the fastest path pg offers for every
+ * statement, whether or not the server prepares it.
+ */
 export async function replayStatements(client: Client, statements: LoggedStatement[]): Promise<void> {
-  for (const s of statements) await client.query(s.text, s.params);
+  for (const s of statements) await client.query({ ...prepared(s.text), text: s.text, values: s.params });
 }
 
 /**
