@@ -58,11 +58,11 @@ export async function getBuildByCommit({ db, commit }: { db: Db; commit: string 
   return db("builds").where({ commit: commit.toLowerCase() }).first();
 }
 
-/** Sets the build's verdict to its worst run's (VERDICT_ORDER; no runs: 'missing') in one statement. */
 const SET_BUILD_VERDICT = `update builds set verdict = coalesce(
        (select r.verdict from runs r where r.build_id = builds.id order by array_position(?::text[], r.verdict) desc limit 1), 'missing')
      where id = ? returning verdict`;
 
+/** Sets the build's verdict to its worst run's (VERDICT_ORDER; no runs: 'missing') in one statement. */
 export async function setBuildVerdict({ db, buildId }: { db: Db; buildId: number }): Promise<Verdict> {
   const result: { rows: { verdict: Verdict }[] } = await db.raw(SET_BUILD_VERDICT, [[...VERDICT_ORDER], buildId]).options(prepared(SET_BUILD_VERDICT));
   return result.rows[0].verdict;
