@@ -15,6 +15,8 @@ const TREND = /* GraphQL */ `
   }
 `;
 
+const WARM_UP = 20;
+
 const SERIES = { case: "flat-plate-zpg", quantity: "kappa", model: "sa", grid: "default" };
 
 export interface TrendSize {
@@ -70,7 +72,9 @@ export async function benchTrend({ sizes, last, repeats, cookie }: { sizes: numb
       const branch = `bench/trend-${n}-${process.pid}`;
       const started = Date.now();
       await seedHistory(client, branch, n);
-      await client.query("analyze builds, runs, quantity_values");
+      // Vacuumed as well as analysed: otherwise autovacuum starts on the fresh rows
+      // while the section measures, and takes one of the machine's two cores.
+      await client.query("vacuum analyze builds, runs, quantity_values");
       const seedSeconds = (Date.now() - started) / 1000;
       const variables = { case: SERIES.case, quantity: SERIES.quantity, model: SERIES.model, branch, last };
       const body = graphQLBody(TREND, variables);
@@ -84,10 +88,12 @@ export async function benchTrend({ sizes, last, repeats, cookie }: { sizes: numb
       const statements = await captureRequestStatements(ask);
       const trendStatement = statements.find((s) => /from quantity_values/i.test(s.text));
       if (!trendStatement) throw new Error(`trend request sent no quantity_values statement (${statements.length} statements logged)`);
-      const http = await measureRepeated(ask, repeats, 3);
+      // Steady state on both sides: 20 unmeasured rounds first (the first requests of a
+      // fresh server compile the query with graphql-jit and warm V8's optimiser).
+      const http = await measureRepeated(ask, repeats, WARM_UP);
       const emptyBody = graphQLBody("query Empty { _version }", {});
-      const emptyQuery = await measureRepeated(() => timedGraphQL(emptyBody, { cookie }), repeats, 3);
-      const bare = await timeRepeated(() => replayStatements(client, statements), repeats, 3);
+      const emptyQuery = await measureRepeated(() => timedGraphQL(emptyBody, { cookie }), repeats, WARM_UP);
+      const bare = await timeRepeated(() => replayStatements(client, statements), repeats, WARM_UP);
       const returned = Math.max(points, 1);
       const explained = await client.query<{ "QUERY PLAN": [{ Plan: PlanNode }] }>(`explain (format json) ${trendStatement.text}`, trendStatement.params);
       out.push({
