@@ -14,12 +14,25 @@ import { createHash } from "node:crypto";
 
 const names = new Map<string, string>();
 
-/** pg query options that prepare `sql` under a name derived from its text (Knex: `.options(prepared(sql))`). */
+/** `select *`, `returning *`, `t.*` (Knex quotes: `"t".*`). */
+const STAR_COLUMNS = /(\bselect\s+(distinct\s+)?|\breturning\s+|\.|,\s*)\*/i;
+
+/**
+ * pg query options that prepare `sql` under a name derived from its text
+ * (Knex: `.options(prepared(sql))`). Refuses a statement that selects or
+ * returns `*`, whose cached plan would break at the next added column.
+ */
 export function prepared(sql: string): { name: string } {
   let name = names.get(sql);
   if (name === undefined) {
-    name = `tl_${createHash("sha256").update(sql).digest("hex").slice(0, 24)}`;
+    if (STAR_COLUMNS.test(sql)) throw new Error(`a prepared statement must name its columns, not *: ${sql.slice(0, 200)}`);
+    name = statementName(sql);
     names.set(sql, name);
   }
   return { name };
+}
+
+/** The name alone, without the column check: for a short-lived connection that no migration can outlive (the bench). */
+export function statementName(sql: string): string {
+  return `tl_${createHash("sha256").update(sql).digest("hex").slice(0, 24)}`;
 }

@@ -1,6 +1,6 @@
 import { openSync, readSync, closeSync, statSync } from "node:fs";
 import { Client } from "pg";
-import { prepared } from "@/db/prepared";
+import { statementName } from "@/db/prepared";
 import { requireEnv } from "./http";
 
 // The SQL statements one HTTP request issues, read from PostgreSQL's own log.
@@ -133,7 +133,7 @@ function readFrom(file: string, offset: number): string {
  * statement, whether or not the server prepares it.
  */
 export async function replayStatements(client: Client, statements: LoggedStatement[]): Promise<void> {
-  for (const s of statements) await client.query({ ...prepared(s.text), text: s.text, values: s.params });
+  for (const s of statements) await client.query({ name: statementName(s.text), text: s.text, values: s.params });
 }
 
 /**

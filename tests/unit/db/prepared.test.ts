@@ -23,4 +23,15 @@ describe("prepared", () => {
     expect(name).toMatch(/^[a-z_][a-z0-9_]*$/);
     expect(Buffer.byteLength(name)).toBeLessThanOrEqual(63);
   });
+
+  it("refuses statements that select or return *, whose cached plan breaks when a column is added", () => {
+    // PostgreSQL answers such a prepared statement with "cached plan must not change result type" after
+    // ALTER TABLE … ADD COLUMN (PostgreSQL documentation, PREPARE: plans are re-planned, result types may not change).
+    for (const sql of ["select * from builds", "SELECT DISTINCT * FROM runs", 'select "b".* from "builds" as "b"', "insert into t (a) values (?) returning *", "select r.* from runs r", "select id, * from runs"]) {
+      expect(() => prepared(sql), sql).toThrow(/name its columns/);
+    }
+    for (const sql of ["select count(*) from builds", "select id, 2 * value from quantity_values", "select id from runs where a * b > 1", "insert into t (a) values (?) returning id"]) {
+      expect(() => prepared(sql), sql).not.toThrow();
+    }
+  });
 });
