@@ -1,6 +1,6 @@
 import "server-only";
 import type { Db } from "../index";
-import type { Verdict } from "@/lib/analysis";
+import type { JudgedQuantity } from "@/lib/evaluation/types";
 
 // The quantities of runs as the GraphQL QuantityValue type shows them: each
 // value with the band it was judged against and its definition's label and
@@ -11,15 +11,16 @@ import type { Verdict } from "@/lib/analysis";
 // details stay text until asked for: pg would otherwise parse 7,000 JSON
 // documents that the build page never shows.
 
-export interface RunQuantityRow {
+/** A stored judged quantity (the judge's facts, by the same names) with its definition and band. */
+export interface RunQuantityRow
+  extends Pick<
+    JudgedQuantity,
+    "key" | "value" | "origin" | "verdict" | "baselineBuildId" | "baselineValue" | "baselineDelta" | "drift" | "driftReason" | "driftPValue" | "driftSlope"
+  > {
   id: number;
   runId: number;
-  key: string;
   label: string | null;
   unit: string | null;
-  value: number | null;
-  origin: "reported" | "derived" | "expected";
-  verdict: Verdict;
   bandId: number | null;
   bandKind: "verification" | "validation" | null;
   bandModel: string | null;
@@ -28,13 +29,6 @@ export interface RunQuantityRow {
   lower: number | null;
   upper: number | null;
   marginalMargin: number | null;
-  baselineBuildId: number | null;
-  baselineValue: number | null;
-  baselineDelta: number | null;
-  drift: boolean;
-  driftReason: "baseline" | "trend" | null;
-  driftPValue: number | null;
-  driftSlope: number | null;
   /** The fit details as JSON text: parsed only when a client asks for them (resolvers/types.ts). */
   detailsJson: string;
 }

@@ -106,10 +106,12 @@ export interface SessionAccount {
   sessions_valid_from: Date | null;
 }
 
-/** Read on every signed-in request (lib/auth/session.ts), hence prepared. */
+const SESSION_ACCOUNT = "select id, email, name, role, active, sessions_valid_from from users where id = ?";
+
+/** Read on every signed-in request (lib/auth/session.ts), hence prepared, and fixed text (no builder to compile each time). */
 export async function getSessionAccount({ db, id }: { db: Db; id: number }): Promise<SessionAccount | undefined> {
-  const q = db("users").where({ id }).first("id", "email", "name", "role", "active", "sessions_valid_from");
-  return q.options(prepared(q.toSQL().sql));
+  const result: { rows: SessionAccount[] } = await db.raw(SESSION_ACCOUNT, [id]).options(prepared(SESSION_ACCOUNT));
+  return result.rows[0];
 }
 
 export interface InviteRow {

@@ -121,17 +121,16 @@ export function bareDecayFit(t: Float64Array, k: Float64Array): number {
   const line = (tv: Float64Array, lv: Float64Array, s: number) => {
     const d0 = Math.exp(s);
     const t1 = tv[0];
-    const x0 = Math.log1p(0);
     const y0 = lv[0];
     let sx = 0, sy = 0, sxx = 0, sxy = 0;
     for (let i = 0; i < tv.length; i++) {
-      const dx = Math.log1p((tv[i] - t1) / d0) - x0;
+      const dx = Math.log1p((tv[i] - t1) / d0); // about the first sample, where log1p(0) = 0
       const dy = lv[i] - y0;
       sx += dx; sy += dy; sxx += dx * dx; sxy += dx * dy;
     }
     const m = tv.length;
     const slope = (sxy - (sx * sy) / m) / (sxx - (sx * sx) / m);
-    const intercept = y0 + sy / m - slope * (x0 + sx / m);
+    const intercept = y0 + sy / m - slope * (sx / m);
     let sse = 0;
     for (let i = 0; i < tv.length; i++) {
       const r = lv[i] - intercept - slope * Math.log1p((tv[i] - t1) / d0);
